@@ -1,0 +1,34 @@
+/**
+ * The one permission table: every action a route can perform, and the roles allowed to do it.
+ * The server's guard middleware enforces it on every route; the client reads it only to hide
+ * what a role cannot use.
+ */
+export const ROLES = ["lead", "forecaster", "manager", "admin"] as const;
+export type Role = (typeof ROLES)[number];
+
+export const ROLE_LABELS: Record<Role, string> = {
+  lead: "Lead forecaster",
+  forecaster: "Forecaster",
+  manager: "Manager",
+  admin: "Administrator",
+};
+
+const EVERYONE: readonly Role[] = ROLES;
+
+export const PERMISSIONS = {
+  "session.read": EVERYONE,
+  "users.read": ["admin"],
+  "users.write": ["admin"],
+  "audit.read": ["manager", "admin"],
+  "audit.verify": ["manager", "admin"],
+  "soundings.diagnose": EVERYONE,
+  "catalogue.read": EVERYONE,
+} as const satisfies Record<string, readonly Role[]>;
+
+export type Permission = keyof typeof PERMISSIONS;
+
+/** True when any of the given roles holds the permission. */
+export function can(roles: readonly Role[], permission: Permission): boolean {
+  const allowed: readonly Role[] = PERMISSIONS[permission];
+  return roles.some((role) => allowed.includes(role));
+}
