@@ -1,0 +1,44 @@
+import { z } from "zod";
+import path from "node:path";
+
+const boolFromEnv = z
+  .enum(["1", "0", "true", "false", "yes", "no", "on", "off"])
+  .transform((v) => ["1", "true", "yes", "on"].includes(v));
+
+/** Every setting Bellwether reads from the environment, parsed once at start-up. */
+const configSchema = z.object({
+  PORT: z.coerce.number().int().min(0).max(65535).default(8080),
+  HOST: z.string().min(1).default("127.0.0.1"),
+  DATA_DIR: z.string().min(1).default("./data"),
+  DEMO: boolFromEnv.default(true),
+  DEMO_PASSWORD: z.string().min(8, "DEMO_PASSWORD needs at least 8 characters").default("bellwether-demo"),
+  ADMIN_USERNAME: z.string().min(2).optional(),
+  ADMIN_PASSWORD: z.string().min(10, "ADMIN_PASSWORD needs at least 10 characters").optional(),
+  SESSION_SECRET: z.string().min(32, "SESSION_SECRET needs at least 32 characters").optional(),
+  SESSION_TTL_HOURS: z.coerce.number().positive().max(24 * 30).default(12),
+  COOKIE_SECURE: boolFromEnv.default(false),
+  BCRYPT_COST: z.coerce.number().int().min(12, "BCRYPT_COST must be at least 12").max(15).default(12),
+  LOGIN_RATE_LIMIT: z.coerce.number().int().min(1).default(10),
+  LOGIN_RATE_WINDOW_MINUTES: z.coerce.number().positive().default(15),
+  LOG_LEVEL: z.enum(["fatal", "error", "warn", "info", "debug", "trace", "silent"]).default("info"),
+  JOBS: boolFromEnv.default(true),
+  PUBLIC_URL: z.string().url().optional(),
+});
+
+export type AppConfig = z.infer<typeof configSchema> & { dataDir: string; databaseFile: string };
+
+export class ConfigError extends Error {}
+
+/** Parses configuration from an environment map; fails loudly, naming every bad key. */
+export function loadConfig(env: NodeJS.ProcessEnv = process.env, overrides: Partial<Record<string, string>> = {}): AppConfig {
+  const source: Record<string, string | undefined> = { ...env, ...overrides };
+  // Empty strings mean "not set", as shells often export them that way.
+  for (const key of Object.keys(source)) if (source[key] === "") delete source[key];
+  const parsed = configSchema.safeParse(source);
+  if (!parsed.success) {
+    const lines = parsed.error.issues.map((i) => `  ${i.path.join(".")}: ${i.message}`);
+    throw new ConfigError(`Invalid configuration:\n${lines.join("\n")}`);
+  }
+  const dataDir = path.resolve(parsed.data.DATA_DIR);
+  return { ...parsed.data, dataDir, databaseFile: path.join(dataDir, "bellwether.sqlite") };
+}

@@ -1,0 +1,67 @@
+import fs from "node:fs";
+import os from "node:os";
+import path from "node:path";
+import request from "supertest";
+import type { DataSource } from "typeorm";
+import type { Express } from "express";
+import { loadConfig, type AppConfig } from "../../server/config.ts";
+import { openDatabase } from "../../server/db/data-source.ts";
+import { createApp } from "../../server/app.ts";
+import { createLogger } from "../../server/logger.ts";
+import { seedDemoAccounts } from "../../server/demo/seed.ts";
+import type { RouteEntry } from "../../server/http/route-table.ts";
+import type { Role } from "../../shared/auth/permissions.ts";
+
+export const TEST_PASSWORD = "test-password-123";
+
+export interface TestServer {
+  app: Express;
+  routes: RouteEntry[];
+  dataSource: DataSource;
+  config: AppConfig;
+  dataDir: string;
+  close(): Promise<void>;
+}
+
+/** A real app on a real SQLite file in a fresh temporary folder, migrated and seeded with the demo accounts. */
+export async function startTestServer(env: Record<string, string> = {}): Promise<TestServer> {
+  const dataDir = fs.mkdtempSync(path.join(os.tmpdir(), "bellwether-test-"));
+  const config = loadConfig({}, { DATA_DIR: dataDir, LOG_LEVEL: "silent", DEMO_PASSWORD: TEST_PASSWORD, LOGIN_RATE_LIMIT: "1000", JOBS: "false", ...env });
+  const dataSource = await openDatabase({ database: config.databaseFile });
+  await seedDemoAccounts(dataSource, TEST_PASSWORD, config.BCRYPT_COST);
+  const { app, routes } = createApp({ config, dataSource, logger: createLogger("silent"), sessionSecret: "x".repeat(48) });
+  return {
+    app,
+    routes,
+    dataSource,
+    config,
+    dataDir,
+    async close() {
+      await dataSource.destroy();
+      fs.rmSync(dataDir, { recursive: true, force: true });
+    },
+  };
+}
+
+export const DEMO_USER_FOR_ROLE: Record<Role, string> = { lead: "lead", forecaster: "forecaster", manager: "manager", admin: "admin" };
+
+export interface SignedInAgent {
+  agent: ReturnType<typeof request.agent>;
+  csrf: string;
+}
+
+/** Signs in through the public API exactly as a script would: login, then fetch the CSRF token. */
+export async function signIn(app: Express, username: string, password = TEST_PASSWORD): Promise<SignedInAgent> {
+  const agent = request.agent(app);
+  const login = await agent.post("/api/auth/login").send({ username, password });
+  if (login.status !== 200) throw new Error(`sign-in as ${username} failed: ${login.status} ${JSON.stringify(login.body)}`);
+  const csrf = await agent.get("/api/auth/csrf");
+  return { agent, csrf: csrf.body.token as string };
+}
+
+/** An anonymous agent that already holds a CSRF token (so a 401 is about the session, not CSRF). */
+export async function anonymous(app: Express): Promise<SignedInAgent> {
+  const agent = request.agent(app);
+  const csrf = await agent.get("/api/auth/csrf");
+  return { agent, csrf: csrf.body.token as string };
+}
