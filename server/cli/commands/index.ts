@@ -1,0 +1,5 @@
+import type { CliCommand } from "../command.ts";
+import { auditCommand } from "./audit.command.ts";
+
+/** Every CLI command by name; add a new command's file here. */
+export const COMMANDS: readonly CliCommand[] = [auditCommand];

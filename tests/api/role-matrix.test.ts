@@ -1,0 +1,83 @@
+import { afterAll, beforeAll, describe, expect, it } from "vitest";
+import { ROLES, PERMISSIONS, type Role } from "../../shared/auth/permissions.ts";
+import { startTestServer, signIn, anonymous, DEMO_USER_FOR_ROLE, type SignedInAgent, type TestServer } from "../helpers/test-server.ts";
+import type { HttpMethod, RouteEntry } from "../../server/http/route-table.ts";
+
+/**
+ * Walks every registered API route for every role (and for a visitor who is not signed in) and
+ * checks the guard: 401 without a session, 403 for roles without the permission, 2xx otherwise.
+ * A route added without an example here fails the coverage test, so the matrix stays complete.
+ */
+interface Example {
+  /** Concrete path (ids filled in). */
+  path: string;
+  body?: () => unknown;
+}
+
+let counter = 0;
+const EXAMPLES: Record<string, Example> = {
+  "get /api/health/": { path: "/api/health" },
+  "get /api/auth/csrf": { path: "/api/auth/csrf" },
+  "post /api/auth/login": { path: "/api/auth/login", body: () => ({ username: "forecaster", password: "test-password-123" }) },
+  "post /api/auth/logout": { path: "/api/auth/logout" },
+  "get /api/auth/me": { path: "/api/auth/me" },
+  "get /api/users/": { path: "/api/users" },
+  "post /api/users/": {
+    path: "/api/users",
+    body: () => ({ username: `matrix-${++counter}`, displayName: "Matrix probe", password: "matrix-password-1", roles: ["forecaster"] }),
+  },
+  "patch /api/users/:id": { path: "/api/users/2", body: () => ({ displayName: `Renamed ${++counter}` }) },
+  "post /api/users/:id/password": { path: "/api/users/2/password", body: () => ({ password: "another-password-1" }) },
+  "get /api/audit/": { path: "/api/audit?page=1&pageSize=5" },
+  "get /api/audit/verify": { path: "/api/audit/verify" },
+};
+
+const keyOf = (r: RouteEntry) => `${r.method} ${r.path}`;
+
+function allowedRoles(route: RouteEntry): readonly Role[] {
+  if (route.access === "public" || route.access === "signed-in") return ROLES;
+  return PERMISSIONS[route.access];
+}
+
+async function call(who: SignedInAgent, method: HttpMethod, example: Example) {
+  const req = who.agent[method](example.path).set("x-csrf-token", who.csrf);
+  return example.body ? req.send(example.body() as object) : req;
+}
+
+let server: TestServer;
+beforeAll(async () => {
+  server = await startTestServer();
+});
+afterAll(async () => server.close());
+
+describe("route × role matrix", () => {
+  it("has an example for every registered route", () => {
+    const missing = server.routes.map(keyOf).filter((k) => !(k in EXAMPLES));
+    expect(missing).toEqual([]);
+    expect(server.routes.length).toBe(Object.keys(EXAMPLES).length);
+  });
+
+  it("refuses every non-public route to a visitor who is not signed in (401)", async () => {
+    for (const route of server.routes.filter((r) => r.access !== "public")) {
+      const res = await call(await anonymous(server.app), route.method, EXAMPLES[keyOf(route)]!);
+      expect(res.status, keyOf(route)).toBe(401);
+    }
+  });
+
+  for (const role of ROLES) {
+    it(`enforces the permission table for the ${role} role`, async () => {
+      const shared = await signIn(server.app, DEMO_USER_FOR_ROLE[role]);
+      for (const route of server.routes) {
+        // Sign-in and sign-out replace the session, so they get a fresh one; other cells share one.
+        const who = route.path.startsWith("/api/auth/log") ? await signIn(server.app, DEMO_USER_FOR_ROLE[role]) : shared;
+        const res = await call(who, route.method, EXAMPLES[keyOf(route)]!);
+        const expected = allowedRoles(route).some((r) => (DEMO_ROLES[role] as readonly Role[]).includes(r)) ? "2xx" : 403;
+        if (expected === 403) expect(res.status, `${role} ${keyOf(route)}`).toBe(403);
+        else expect([200, 201, 204], `${role} ${keyOf(route)}: ${res.status} ${JSON.stringify(res.body)}`).toContain(res.status);
+      }
+    });
+  }
+});
+
+/** Roles each demo account holds (lead is also a forecaster). */
+const DEMO_ROLES: Record<Role, readonly Role[]> = { lead: ["lead", "forecaster"], forecaster: ["forecaster"], manager: ["manager"], admin: ["admin"] };
