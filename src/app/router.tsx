@@ -1,0 +1,93 @@
+import type { QueryClient } from "@tanstack/react-query";
+import { createBrowserRouter, redirect, type LoaderFunctionArgs } from "react-router-dom";
+import { NotFound } from "@/components/errors/not-found.tsx";
+import { RouteError } from "@/components/errors/route-error.tsx";
+import { loginPathFor, paths, safeNextPath } from "@/config/paths.ts";
+import { currentUserQuery, sessionKeys } from "@/lib/auth.ts";
+import { RequirePermission } from "./require-permission.tsx";
+import { AppRoot } from "./routes/app-root.tsx";
+import { OverviewRoute } from "./routes/overview.tsx";
+import { SignInRoute } from "./routes/sign-in.tsx";
+
+function pathOf(request: Request): string {
+  const url = new URL(request.url);
+  return url.pathname + url.search;
+}
+
+/** Signed-in area guard: no session sends the user to sign in, remembering where they were going. */
+function requireSession(queryClient: QueryClient) {
+  return async ({ request }: LoaderFunctionArgs) => {
+    const user = await queryClient.ensureQueryData(currentUserQuery());
+    if (!user) throw redirect(loginPathFor(pathOf(request)));
+    return null;
+  };
+}
+
+/** The sign-in page is skipped when a session already exists. */
+function skipSignInWhenSignedIn(queryClient: QueryClient) {
+  return async ({ request }: LoaderFunctionArgs) => {
+    try {
+      const user = await queryClient.ensureQueryData(currentUserQuery());
+      if (user) throw redirect(safeNextPath(new URL(request.url).searchParams.get("next")));
+    } catch (error) {
+      if (error instanceof Response) throw error;
+      // Server unreachable: still show the form, which reports the failure when used.
+    }
+    return null;
+  };
+}
+
+export function createAppRouter(queryClient: QueryClient) {
+  return createBrowserRouter([
+    {
+      path: paths.login,
+      loader: skipSignInWhenSignedIn(queryClient),
+      element: <SignInRoute />,
+      errorElement: <RouteError />,
+    },
+    {
+      id: "signed-in",
+      loader: requireSession(queryClient),
+      element: <AppRoot />,
+      errorElement: <RouteError />,
+      children: [
+        {
+          // Pathless so a failing page shows its error inside the layout, keeping menu and header.
+          errorElement: <RouteError />,
+          children: [
+            { index: true, element: <OverviewRoute /> },
+            {
+              path: paths.soundings,
+              element: <RequirePermission area="soundings" />,
+              children: [{ index: true, lazy: () => import("./routes/soundings.tsx") }],
+            },
+            {
+              path: paths.accounts,
+              element: <RequirePermission area="accounts" />,
+              children: [{ index: true, lazy: () => import("./routes/accounts.tsx") }],
+            },
+            {
+              path: paths.audit,
+              element: <RequirePermission area="audit" />,
+              children: [{ index: true, lazy: () => import("./routes/audit.tsx") }],
+            },
+            { path: "*", element: <NotFound /> },
+          ],
+        },
+      ],
+    },
+  ]);
+}
+
+export type AppRouter = ReturnType<typeof createAppRouter>;
+
+/**
+ * What happens when any request answers 401: forget the session and let the router take the user
+ * to sign in, with a way back to the page they were on. No full-page reload.
+ */
+export function sendToSignIn(router: AppRouter, queryClient: QueryClient): void {
+  const { pathname, search } = router.state.location;
+  if (pathname === paths.login) return;
+  queryClient.setQueryData(sessionKeys.me(), null);
+  void router.navigate(loginPathFor(pathname + search), { replace: true });
+}

@@ -1,0 +1,6 @@
+import { SoundingsPage } from "@/features/soundings/soundings-page.tsx";
+
+/** Lazy route module: React Router picks up `Component`. */
+export function Component() {
+  return <SoundingsPage />;
+}

@@ -1,0 +1,78 @@
+import { Controller, useForm } from "react-hook-form";
+import { zodResolver } from "@hookform/resolvers/zod";
+import { createUserInput, type CreateUserInput } from "@shared/api/users.ts";
+import { Button } from "@/components/ui/button.tsx";
+import { Dialog } from "@/components/ui/dialog.tsx";
+import { Notice } from "@/components/ui/notice.tsx";
+import { TextField } from "@/components/ui/text-field.tsx";
+import { useToast } from "@/components/ui/toaster.tsx";
+import { isApiError } from "@/lib/api-client.ts";
+import { describeError, describeErrorLine } from "@/lib/describe-error.ts";
+import { fieldErrorsFromApiError } from "@/lib/form-errors.ts";
+import { useCreateUser } from "../api/create-user.ts";
+import { RoleCheckboxes } from "./role-checkboxes.tsx";
+
+const EMPTY: CreateUserInput = { username: "", displayName: "", password: "", roles: ["forecaster"] };
+const FIELDS = ["username", "displayName", "password", "roles"] as const;
+
+export function CreateAccountDialog({ open, onClose }: { open: boolean; onClose: () => void }) {
+  const createUser = useCreateUser();
+  const toast = useToast();
+  const form = useForm({ resolver: zodResolver(createUserInput), defaultValues: EMPTY });
+  const { errors } = form.formState;
+
+  const close = () => {
+    form.reset(EMPTY);
+    createUser.reset();
+    onClose();
+  };
+
+  const submit = form.handleSubmit((input) =>
+    createUser.mutate(input, {
+      onSuccess: (user) => {
+        toast.success("Account created", `${user.displayName} (${user.username}) can now sign in.`);
+        close();
+      },
+      onError: (error) => {
+        toast.error("Account not created", describeErrorLine(error));
+        // Put the server's field messages (e.g. a username already in use) beside the fields.
+        const fieldErrors = fieldErrorsFromApiError(error);
+        for (const field of FIELDS) {
+          if (fieldErrors[field]) form.setError(field, { message: fieldErrors[field] });
+        }
+        if (isApiError(error) && error.status === 409 && !fieldErrors.username) {
+          form.setError("username", { message: error.message });
+        }
+      },
+    }),
+  );
+
+  return (
+    <Dialog open={open} onClose={close} title="New account" description="The person signs in with this username and password.">
+      <form onSubmit={submit} noValidate className="flex flex-col gap-3">
+        <TextField label="Username" mono autoComplete="off" spellCheck={false} error={errors.username?.message} {...form.register("username")} />
+        <TextField label="Display name" autoComplete="off" error={errors.displayName?.message} {...form.register("displayName")} />
+        <TextField
+          label="Initial password"
+          type="password"
+          autoComplete="new-password"
+          hint="At least 10 characters. Share it privately; they can be given a new one later."
+          error={errors.password?.message}
+          {...form.register("password")}
+        />
+        <Controller
+          control={form.control}
+          name="roles"
+          render={({ field, fieldState }) => <RoleCheckboxes value={field.value} onChange={field.onChange} error={fieldState.error?.message} />}
+        />
+        {createUser.isError && <Notice tone="danger">{describeError(createUser.error).message}</Notice>}
+        <div className="mt-1 flex justify-end gap-2">
+          <Button onClick={close}>Cancel</Button>
+          <Button type="submit" variant="primary" disabled={createUser.isPending}>
+            {createUser.isPending ? "Creating…" : "Create account"}
+          </Button>
+        </div>
+      </form>
+    </Dialog>
+  );
+}
