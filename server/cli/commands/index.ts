@@ -1,5 +1,6 @@
 import type { CliCommand } from "../command.ts";
 import { auditCommand } from "./audit.command.ts";
+import { diagnoseCommand } from "./diagnose.command.ts";
 
 /** Every CLI command by name; add a new command's file here. */
-export const COMMANDS: readonly CliCommand[] = [auditCommand];
+export const COMMANDS: readonly CliCommand[] = [auditCommand, diagnoseCommand];
