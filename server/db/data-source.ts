@@ -49,5 +49,5 @@ export function writeTransaction<T>(dataSource: DataSource, work: (manager: Enti
     queue = new PQueue({ concurrency: 1 });
     writeQueues.set(dataSource, queue);
   }
-  return queue.add(() => dataSource.transaction(work), { throwOnTimeout: true }) as Promise<T>;
+  return queue.add(() => dataSource.transaction(work)) as Promise<T>;
 }

@@ -1,14 +1,12 @@
 import fs from "node:fs";
-import os from "node:os";
 import path from "node:path";
 import { chromium, type Browser, type Page } from "playwright-core";
 
 export const CHROMIUM_PATH = process.env.CHROMIUM_PATH ?? "/usr/bin/chromium";
 export const SCREENSHOT_DIR = path.resolve("test-output/screenshots");
 
-/** Debian's Chromium, headless, with a throw-away profile and no background network traffic. */
+/** Debian's Chromium, headless, with no background network traffic (playwright gives it a fresh profile). */
 export async function launchBrowser(): Promise<{ browser: Browser; close(): Promise<void> }> {
-  const profile = fs.mkdtempSync(path.join(os.tmpdir(), "bellwether-chromium-"));
   const browser = await chromium.launch({
     executablePath: CHROMIUM_PATH,
     headless: true,
@@ -21,14 +19,12 @@ export async function launchBrowser(): Promise<{ browser: Browser; close(): Prom
       "--disable-background-networking",
       "--disable-component-update",
       "--disable-sync",
-      `--user-data-dir=${profile}`,
     ],
   });
   return {
     browser,
     async close() {
       await browser.close();
-      fs.rmSync(profile, { recursive: true, force: true });
     },
   };
 }
