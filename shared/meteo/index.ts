@@ -25,7 +25,7 @@ export {
 } from "./thermo/pseudo-adiabat.ts";
 export { PseudoAdiabatTable, getPseudoAdiabatTable, DEFAULT_TABLE_SPEC, type PseudoAdiabatTableSpec } from "./thermo/pseudo-adiabat-table.ts";
 
-export { analyzeBuoyancy, BuoyancyResult } from "./parcel/buoyancy-bookkeeping.ts";
+export { analyzeBuoyancy, runningBuoyancyIntegral, BuoyancyResult } from "./parcel/buoyancy-bookkeeping.ts";
 export type { PseudoAdiabatMethod } from "./parcel/lift-parcel.ts";
 
 export { WindVector, windAtHeight, type WindProfile } from "./kinematics/wind-profile.ts";

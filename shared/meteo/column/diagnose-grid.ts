@@ -18,7 +18,7 @@ export interface PointRange {
 }
 
 /** Dewpoint (K) from any supported humidity form, never above the temperature. */
-function dewpointFrom(kind: HumidityKind, value: number, temperature: number, pressure: number): number {
+export function dewpointFrom(kind: HumidityKind, value: number, temperature: number, pressure: number): number {
   let td: number;
   if (kind === "dewpoint") td = value;
   else if (kind === "specificHumidity") td = dewpointFromVaporPressure((value * pressure) / (MOLAR_MASS_RATIO + (1 - MOLAR_MASS_RATIO) * value));

@@ -143,3 +143,15 @@ export function valueAtPosition(values: ArrayLike<number>, position: number): nu
   if (f === 0) return values[k];
   return values[k] + f * (values[k + 1] - values[k]);
 }
+
+/**
+ * Running net buoyancy integral E at every node, E(k) = Rd ∫ Δ d(ln p) from the origin (J kg⁻¹), with the same
+ * exact piecewise-linear integration as analyzeBuoyancy (for energy plots and checks).
+ */
+export function runningBuoyancyIntegral(lnPressure: ArrayLike<number>, delta: ArrayLike<number>, count: number, out: Float64Array): void {
+  if (count < 1) return;
+  out[0] = 0;
+  for (let k = 0; k < count - 1; k++) {
+    out[k + 1] = out[k] + GAS_CONSTANT_DRY_AIR * 0.5 * (lnPressure[k] - lnPressure[k + 1]) * (delta[k] + delta[k + 1]);
+  }
+}
