@@ -63,6 +63,7 @@ export function parseSoundingCsv(text: string): SoundingProfile {
   while (index < rows.length && rows[index].trim() === "") index++;
   if (index >= rows.length) throw new SoundingFormatError(1, `the file is empty; expected the header "${SOUNDING_CSV_HEADER}"`);
   const header = rows[index].trim();
+  const headerLine = index + 1;
   if (header !== SOUNDING_CSV_HEADER) {
     throw new SoundingFormatError(index + 1, `header must be exactly "${SOUNDING_CSV_HEADER}", found "${header}"`);
   }
@@ -117,7 +118,8 @@ export function parseSoundingCsv(text: string): SoundingProfile {
     lines.push(line);
   }
   if (pressure.length < MIN_SOUNDING_LEVELS) {
-    throw new SoundingFormatError(rows.length, `the sounding has ${pressure.length} level${pressure.length === 1 ? "" : "s"}; at least ${MIN_SOUNDING_LEVELS} are needed`);
+    const lastLine = lines.length > 0 ? lines[lines.length - 1] : headerLine;
+    throw new SoundingFormatError(lastLine, `the sounding has ${pressure.length} level${pressure.length === 1 ? "" : "s"}; at least ${MIN_SOUNDING_LEVELS} are needed`);
   }
   return {
     pressure: Float64Array.from(pressure),
