@@ -1,7 +1,7 @@
 import { describe, expect, it } from "vitest";
 import { COLUMN_FIELD_KEYS } from "../../shared/fields.ts";
 import { diagnoseColumn, diagnoseColumnGrid } from "../../shared/meteo/index.ts";
-import { columnProfileAt, emptyOutput, syntheticGrid } from "../helpers/synthetic-grid.ts";
+import { columnProfileAt, emptyOutput, syntheticGrid } from "../helpers/synthetic-column-grid.ts";
 
 // Invented grids: these tests compare two code paths with each other, not with outside values.
 const grid = syntheticGrid({ pointCount: 60, levelCount: 30, seed: 42 });
