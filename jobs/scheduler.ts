@@ -3,10 +3,15 @@ import type { Logger } from "pino";
 import type { DataSource } from "typeorm";
 import { verifyAuditChain, appendAudit, SYSTEM_ACTOR } from "../server/audit/audit-log.ts";
 import { writeTransaction } from "../server/db/data-source.ts";
+import type { Services } from "../server/services/container.ts";
+import path from "node:path";
+import { InboxPoller } from "./ingest/poll-inbox.job.ts";
+import { pruneOldRuns } from "./maintenance/prune-grids.job.ts";
 
 export interface JobContext {
   dataSource: DataSource;
   logger: Logger;
+  services: Services;
 }
 
 export interface Scheduler {
@@ -24,7 +29,15 @@ export async function runAuditVerification(ctx: JobContext): Promise<void> {
 
 /** Starts every scheduled job. Each cron line only starts work; the work lives in its own function. */
 export function startScheduler(ctx: JobContext): Scheduler {
+  const { config } = ctx.services;
+  const inbox = new InboxPoller(config.inboxDir, path.join(config.dataDir, "incoming"), ctx.services.ingest, ctx.logger);
+  const report = (name: string) => (err: unknown) => ctx.logger.error({ err }, `${name} failed`);
   const tasks: ScheduledTask[] = [
+    cron.schedule(`*/${config.INBOX_POLL_SECONDS} * * * * *`, () => void inbox.poll().catch(report("inbox poll")), { timezone: "UTC", name: "inbox-poll" }),
+    cron.schedule("5 * * * *", () => void pruneOldRuns(ctx.dataSource, config.dataDir, config.GRID_RETENTION_DAYS, new Date()).catch(report("grid retention")), {
+      timezone: "UTC",
+      name: "grid-retention",
+    }),
     cron.schedule("17 3 * * *", () => void runAuditVerification(ctx).catch((err) => ctx.logger.error({ err }, "audit verification failed")), {
       timezone: "UTC",
       name: "audit-verify",

@@ -1,28 +1,25 @@
 import express, { type Express } from "express";
 import cookieParser from "cookie-parser";
 import { pinoHttp } from "pino-http";
-import type { Logger } from "pino";
 import { randomUUID } from "node:crypto";
 import fs from "node:fs";
 import path from "node:path";
-import type { DataSource } from "typeorm";
-import type { AppConfig } from "./config.ts";
 import { createPassport } from "./auth/passport-setup.ts";
 import { createSessionMiddleware } from "./auth/session-middleware.ts";
 import { createCsrf } from "./auth/csrf.ts";
 import { securityHeaders } from "./http/security.ts";
 import { apiNotFound, errorHandler } from "./http/error-handler.ts";
 import type { RouteEntry } from "./http/route-table.ts";
-import { UserService } from "./services/user.service.ts";
+import type { Services } from "./services/container.ts";
+import { createGridsRouter } from "./routes/grids.router.ts";
+import { createEventsRouter } from "./routes/events.router.ts";
 import { createHealthRouter } from "./routes/health.router.ts";
 import { createAuthRouter } from "./routes/auth.router.ts";
 import { createUsersRouter } from "./routes/users.router.ts";
 import { createAuditRouter } from "./routes/audit.router.ts";
 
 export interface AppDeps {
-  config: AppConfig;
-  dataSource: DataSource;
-  logger: Logger;
+  services: Services;
   sessionSecret: string;
   /** Folder of the built client; when absent the API still serves. */
   clientDir?: string;
@@ -36,7 +33,8 @@ export interface BellwetherApp {
 
 /** Builds the Express application. It never listens: main.ts and tests do that. */
 export function createApp(deps: AppDeps): BellwetherApp {
-  const { config, dataSource, logger } = deps;
+  const { services } = deps;
+  const { config, dataSource, logger } = services;
   const app = express();
   const routes: RouteEntry[] = [];
   app.disable("x-powered-by");
@@ -67,7 +65,7 @@ export function createApp(deps: AppDeps): BellwetherApp {
   // it creates gets a fresh id; every other state-changing request needs the token.
   app.use("/api", (req, res, next) => (req.path === "/auth/login" ? next() : csrf.doubleCsrfProtection(req, res, next)));
 
-  const users = new UserService(dataSource, config.BCRYPT_COST);
+  const users = services.users;
   app.use("/api/health", createHealthRouter(routes));
   app.use(
     "/api/auth",
@@ -78,6 +76,11 @@ export function createApp(deps: AppDeps): BellwetherApp {
   );
   app.use("/api/users", createUsersRouter(users, routes));
   app.use("/api/audit", createAuditRouter(dataSource, routes));
+  app.use(
+    "/api/grids",
+    createGridsRouter({ dataSource, dataDir: config.dataDir, ingest: services.ingest, grids: services.grids, uploadMaxBytes: config.GRID_UPLOAD_MAX_MB * 1024 * 1024 }, routes),
+  );
+  app.use("/api/events", createEventsRouter(services.events, routes));
   app.use("/api", apiNotFound);
 
   if (deps.clientDir && fs.existsSync(path.join(deps.clientDir, "index.html"))) {

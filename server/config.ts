@@ -22,10 +22,15 @@ const configSchema = z.object({
   LOGIN_RATE_WINDOW_MINUTES: z.coerce.number().positive().default(15),
   LOG_LEVEL: z.enum(["fatal", "error", "warn", "info", "debug", "trace", "silent"]).default("info"),
   JOBS: boolFromEnv.default(true),
+  GRID_UPLOAD_MAX_MB: z.coerce.number().positive().max(16384).default(2048),
+  INBOX_DIR: z.string().min(1).optional(),
+  INBOX_POLL_SECONDS: z.coerce.number().int().min(2).max(3600).default(15),
+  GRID_RETENTION_DAYS: z.coerce.number().positive().max(3650).default(14),
+  DIAGNOSTIC_THREADS: z.coerce.number().int().min(0).max(64).optional(),
   PUBLIC_URL: z.string().url().optional(),
 });
 
-export type AppConfig = z.infer<typeof configSchema> & { dataDir: string; databaseFile: string };
+export type AppConfig = z.infer<typeof configSchema> & { dataDir: string; databaseFile: string; inboxDir: string };
 
 export class ConfigError extends Error {}
 
@@ -40,5 +45,6 @@ export function loadConfig(env: NodeJS.ProcessEnv = process.env, overrides: Part
     throw new ConfigError(`Invalid configuration:\n${lines.join("\n")}`);
   }
   const dataDir = path.resolve(parsed.data.DATA_DIR);
-  return { ...parsed.data, dataDir, databaseFile: path.join(dataDir, "bellwether.sqlite") };
+  const inboxDir = path.resolve(parsed.data.INBOX_DIR ?? path.join(dataDir, "inbox"));
+  return { ...parsed.data, dataDir, databaseFile: path.join(dataDir, "bellwether.sqlite"), inboxDir };
 }

@@ -13,6 +13,7 @@ import { resolveSessionSecret } from "./session-secret.ts";
 import { createApp } from "./app.ts";
 import { isNewDatabase, seedDemoAccounts, seedFirstAdmin } from "./demo/seed.ts";
 import { startScheduler, type Scheduler } from "../jobs/scheduler.ts";
+import { createServices, type Services } from "./services/container.ts";
 
 export const CLIENT_DIR = fileURLToPath(new URL("../dist/client", import.meta.url));
 
@@ -23,6 +24,7 @@ export interface RunningBellwether {
   app: Express;
   dataSource: DataSource;
   logger: Logger;
+  services: Services;
   close(): Promise<void>;
 }
 
@@ -45,14 +47,17 @@ export async function startBellwether(overrides: Partial<Record<string, string>>
   }
 
   const sessionSecret = resolveSessionSecret(config.dataDir, config.SESSION_SECRET);
-  const { app } = createApp({ config, dataSource, logger, sessionSecret, clientDir: CLIENT_DIR });
+  const services = createServices(config, dataSource, logger);
+  const { app } = createApp({ services, sessionSecret, clientDir: CLIENT_DIR });
   const server = http.createServer(app);
   await new Promise<void>((resolve, reject) => {
     server.once("error", reject);
     server.listen(config.PORT, config.HOST, () => resolve());
   });
   const port = (server.address() as AddressInfo).port;
-  const scheduler: Scheduler | null = config.JOBS ? startScheduler({ dataSource, logger }) : null;
+  const resumed = await services.ingest.resumeUnfinished();
+  if (resumed > 0) logger.info({ resumed }, "resumed unfinished ingest jobs");
+  const scheduler: Scheduler | null = config.JOBS ? startScheduler({ dataSource, logger, services }) : null;
   const url = `http://${config.HOST === "0.0.0.0" ? "127.0.0.1" : config.HOST}:${port}`;
   logger.info({ url }, "Bellwether is serving");
 
@@ -60,11 +65,12 @@ export async function startBellwether(overrides: Partial<Record<string, string>>
   const close = () =>
     (closing ??= (async () => {
       await scheduler?.stop();
+      await services.close();
       server.closeAllConnections();
       await new Promise<void>((resolve) => server.close(() => resolve()));
       await dataSource.destroy();
     })());
-  return { url, port, config, app, dataSource, logger, close };
+  return { url, port, config, app, dataSource, logger, services, close };
 }
 
 /** Runs until SIGINT/SIGTERM, then shuts down cleanly. */

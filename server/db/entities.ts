@@ -1,6 +1,10 @@
 import { AuditEntryEntity } from "../entities/audit-entry.entity.ts";
 import { SessionEntity } from "../entities/session.entity.ts";
 import { UserEntity } from "../entities/user.entity.ts";
+import { IngestJobEntity } from "../entities/ingest-job.entity.ts";
+import { ModelRunEntity } from "../entities/model-run.entity.ts";
+import { GridFrameEntity } from "../entities/grid-frame.entity.ts";
+import { FieldInfoEntity } from "../entities/field-info.entity.ts";
 
 /** Every entity the data source knows; add new ones here. */
-export const ENTITIES = [UserEntity, SessionEntity, AuditEntryEntity];
+export const ENTITIES = [UserEntity, SessionEntity, AuditEntryEntity, IngestJobEntity, ModelRunEntity, GridFrameEntity, FieldInfoEntity];

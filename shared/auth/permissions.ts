@@ -23,6 +23,8 @@ export const PERMISSIONS = {
   "audit.verify": ["manager", "admin"],
   "soundings.diagnose": EVERYONE,
   "catalogue.read": EVERYONE,
+  "grids.read": EVERYONE,
+  "grids.upload": ["lead", "forecaster", "admin"],
 } as const satisfies Record<string, readonly Role[]>;
 
 export type Permission = keyof typeof PERMISSIONS;

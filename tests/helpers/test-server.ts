@@ -10,6 +10,7 @@ import { createApp } from "../../server/app.ts";
 import { createLogger } from "../../server/logger.ts";
 import { seedDemoAccounts } from "../../server/demo/seed.ts";
 import type { RouteEntry } from "../../server/http/route-table.ts";
+import { createServices, type ServiceOverrides, type Services } from "../../server/services/container.ts";
 import type { Role } from "../../shared/auth/permissions.ts";
 
 export const TEST_PASSWORD = "test-password-123";
@@ -20,23 +21,27 @@ export interface TestServer {
   dataSource: DataSource;
   config: AppConfig;
   dataDir: string;
+  services: Services;
   close(): Promise<void>;
 }
 
 /** A real app on a real SQLite file in a fresh temporary folder, migrated and seeded with the demo accounts. */
-export async function startTestServer(env: Record<string, string> = {}): Promise<TestServer> {
+export async function startTestServer(env: Record<string, string> = {}, overrides: ServiceOverrides = {}): Promise<TestServer> {
   const dataDir = fs.mkdtempSync(path.join(os.tmpdir(), "bellwether-test-"));
   const config = loadConfig({}, { DATA_DIR: dataDir, LOG_LEVEL: "silent", DEMO_PASSWORD: TEST_PASSWORD, LOGIN_RATE_LIMIT: "1000", JOBS: "false", ...env });
   const dataSource = await openDatabase({ database: config.databaseFile });
   await seedDemoAccounts(dataSource, TEST_PASSWORD, config.BCRYPT_COST);
-  const { app, routes } = createApp({ config, dataSource, logger: createLogger("silent"), sessionSecret: "x".repeat(48) });
+  const services = createServices(config, dataSource, createLogger("silent"), overrides);
+  const { app, routes } = createApp({ services, sessionSecret: "x".repeat(48) });
   return {
     app,
     routes,
     dataSource,
     config,
     dataDir,
+    services,
     async close() {
+      await services.close();
       await dataSource.destroy();
       fs.rmSync(dataDir, { recursive: true, force: true });
     },
@@ -64,4 +69,13 @@ export async function anonymous(app: Express): Promise<SignedInAgent> {
   const agent = request.agent(app);
   const csrf = await agent.get("/api/auth/csrf");
   return { agent, csrf: csrf.body.token as string };
+}
+
+/** Puts bytes through the real ingest service as if they had landed in the inbox, and waits for the job. */
+export async function ingestBytes(server: TestServer, bytes: Buffer, name: string) {
+  const file = path.join(server.dataDir, `submit-${Date.now()}-${Math.random().toString(36).slice(2)}`);
+  fs.writeFileSync(file, bytes);
+  const result = await server.services.ingest.submitFile(file, { originalName: name, source: "inbox", submittedBy: null });
+  await server.services.ingest.idle();
+  return result;
 }

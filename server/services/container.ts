@@ -1,0 +1,53 @@
+import type { DataSource } from "typeorm";
+import type { Logger } from "pino";
+import type { AppConfig } from "../config.ts";
+import { EventBus } from "../realtime/event-bus.ts";
+import { UserService } from "./user.service.ts";
+import { IngestService } from "../ingest/ingest.service.ts";
+import { GridFrameProcessor, type ColumnDiagnoser, type GridDecoder } from "../ingest/frame-processor.ts";
+import { GridQueryService } from "../grids/grid-query.service.ts";
+import { decodeGridFile } from "../ingest/decode-file.ts";
+import { inProcessColumnDiagnoser } from "../ingest/column-diagnoser.ts";
+
+/** Every long-lived service of one running Bellwether, built once and handed to routes and jobs. */
+export interface Services {
+  config: AppConfig;
+  dataSource: DataSource;
+  logger: Logger;
+  events: EventBus;
+  users: UserService;
+  ingest: IngestService;
+  grids: GridQueryService;
+  /** Releases worker threads and other resources. */
+  close(): Promise<void>;
+}
+
+export interface ServiceOverrides {
+  decode?: GridDecoder;
+  diagnoseColumns?: ColumnDiagnoser;
+}
+
+export function createServices(config: AppConfig, dataSource: DataSource, logger: Logger, overrides: ServiceOverrides = {}): Services {
+  const events = new EventBus();
+  const processor = new GridFrameProcessor({
+    dataSource,
+    dataDir: config.dataDir,
+    events,
+    decode: overrides.decode ?? decodeGridFile,
+    diagnoseColumns: overrides.diagnoseColumns ?? inProcessColumnDiagnoser(),
+    onFrameReady: (frameId) => logger.info({ frameId }, "frame ready"),
+  });
+  const ingest = new IngestService({ dataSource, dataDir: config.dataDir, events, logger, processor });
+  return {
+    config,
+    dataSource,
+    logger,
+    events,
+    users: new UserService(dataSource, config.BCRYPT_COST),
+    ingest,
+    grids: new GridQueryService(dataSource, config.dataDir),
+    async close() {
+      await ingest.stop();
+    },
+  };
+}
