@@ -82,9 +82,12 @@ export class GridFrameProcessor implements FrameProcessor {
         written.push({ frame, folder, fields: this.writeFrameFiles(folder, frame, columns, extras) });
       }
       await progress("diagnosing", 0.97, "Storing frames");
-      const frameIds = await this.commit(job, written);
-      for (const id of frameIds) this.deps.onFrameReady?.(id);
-      return { frameIds, ignored };
+      const committed = await this.commit(job, written);
+      for (const f of committed) {
+        this.deps.events.emit("frame.ready", { frameId: f.id, runId: f.runId, model: f.model, runTime: f.runTime, validTime: f.validTime });
+        this.deps.onFrameReady?.(f.id);
+      }
+      return { frameIds: committed.map((f) => f.id), ignored };
     } finally {
       fs.rmSync(partialRoot, { recursive: true, force: true });
     }
@@ -106,12 +109,12 @@ export class GridFrameProcessor implements FrameProcessor {
     return infos;
   }
 
-  private async commit(job: IngestJobEntity, written: Array<{ frame: FrameInput; folder: string; fields: FieldInfoEntity[] }>): Promise<number[]> {
+  private async commit(job: IngestJobEntity, written: Array<{ frame: FrameInput; folder: string; fields: FieldInfoEntity[] }>): Promise<GridFrameEntity[]> {
     const moved: Array<{ from: string; to: string }> = [];
     const replaced: string[] = [];
     try {
       const ids = await writeTransaction(this.deps.dataSource, async (m) => {
-        const ids: number[] = [];
+        const ids: GridFrameEntity[] = [];
         const now = new Date().toISOString();
         for (const { frame, folder, fields } of written) {
           const runs = m.getRepository(ModelRunEntity);
@@ -147,7 +150,7 @@ export class GridFrameProcessor implements FrameProcessor {
             }),
           );
           await m.getRepository(FieldInfoEntity).save(fields.map((f) => Object.assign(f, { frameId: saved.id })));
-          ids.push(saved.id);
+          ids.push(saved);
         }
         return ids;
       });
