@@ -2,12 +2,18 @@ import type { QueryClient } from "@tanstack/react-query";
 import { createBrowserRouter, redirect, type LoaderFunctionArgs } from "react-router-dom";
 import { NotFound } from "@/components/errors/not-found.tsx";
 import { RouteError } from "@/components/errors/route-error.tsx";
+import { Loading } from "@/components/ui/loading.tsx";
 import { loginPathFor, paths, safeNextPath } from "@/config/paths.ts";
 import { currentUserQuery, sessionKeys } from "@/lib/auth.ts";
 import { RequirePermission } from "./require-permission.tsx";
 import { AppRoot } from "./routes/app-root.tsx";
 import { OverviewRoute } from "./routes/overview.tsx";
 import { SignInRoute } from "./routes/sign-in.tsx";
+
+/** Shown for the moment the first session check takes. */
+function StartingUp() {
+  return <Loading label="Starting Bellwether…" />;
+}
 
 function pathOf(request: Request): string {
   const url = new URL(request.url);
@@ -44,12 +50,14 @@ export function createAppRouter(queryClient: QueryClient) {
       loader: skipSignInWhenSignedIn(queryClient),
       element: <SignInRoute />,
       errorElement: <RouteError />,
+      hydrateFallbackElement: <StartingUp />,
     },
     {
       id: "signed-in",
       loader: requireSession(queryClient),
       element: <AppRoot />,
       errorElement: <RouteError />,
+      hydrateFallbackElement: <StartingUp />,
       children: [
         {
           // Pathless so a failing page shows its error inside the layout, keeping menu and header.

@@ -13,17 +13,27 @@ function Snapshot({ label, value }: { label: string; value: unknown }) {
 /** The before and after snapshots of one entry, with the keys that changed named first. */
 export function AuditEntryDetail({ entry }: { entry: AuditEntryDto }) {
   const changed = changedTopLevelKeys(entry.before, entry.after);
+  const hasSnapshots = entry.before != null || entry.after != null;
   return (
     <div className="flex flex-col gap-2 px-3 py-3">
-      {changed.length > 0 && (
-        <p className="text-xs text-muted">
-          Changed: <span className="font-mono text-ink">{changed.join(", ")}</span>
-        </p>
+      <p className="text-xs text-muted">
+        {entry.actor ? `By ${entry.actor}` : "By the system"}
+        {entry.actorRoles.length > 0 && ` (roles: ${entry.actorRoles.join(", ")})`}
+        {changed.length > 0 && (
+          <>
+            {" · changed "}
+            <span className="font-mono text-ink">{changed.join(", ")}</span>
+          </>
+        )}
+      </p>
+      {hasSnapshots ? (
+        <div className="flex flex-col gap-3 md:flex-row">
+          <Snapshot label="Before" value={entry.before} />
+          <Snapshot label="After" value={entry.after} />
+        </div>
+      ) : (
+        <p className="text-muted">This entry records an event only; no before or after state was kept.</p>
       )}
-      <div className="flex flex-col gap-3 md:flex-row">
-        <Snapshot label="Before" value={entry.before} />
-        <Snapshot label="After" value={entry.after} />
-      </div>
       <p className="font-mono text-[11px] break-all text-muted">
         Hash {entry.hash}
         {entry.requestId && ` · request ${entry.requestId}`}
