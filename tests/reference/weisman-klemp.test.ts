@@ -19,6 +19,7 @@ function closePercent(actual: number | null, expected: number, percent: number):
 
 describe("Weisman-Klemp (1982) sounding, qv0 = 14 g/kg", () => {
   it("surface-based parcel", () => {
+    // Source: Weisman and Klemp (1982) sounding under Bellwether conventions, team reference procedure (see file header)
     closePercent(f.sbcape, 1852, 1);
     expect(Math.abs(f.sbcin! - -47.9)).toBeLessThan(1);
     expect(Math.abs(f.sblcl_hgt! - 999)).toBeLessThan(10);
@@ -27,6 +28,7 @@ describe("Weisman-Klemp (1982) sounding, qv0 = 14 g/kg", () => {
   });
 
   it("mixed-layer parcel", () => {
+    // Source: Weisman and Klemp (1982) sounding under Bellwether conventions, team reference procedure (see file header)
     closePercent(f.mlcape, 2017, 1);
     expect(Math.abs(f.mlcin! - -23.7)).toBeLessThan(1);
     expect(Math.abs(f.mllcl_hgt! - 1094)).toBeLessThan(10);
@@ -35,6 +37,7 @@ describe("Weisman-Klemp (1982) sounding, qv0 = 14 g/kg", () => {
   });
 
   it("most-unstable parcel starts at 1210 m / 870.3 hPa", () => {
+    // Source: Weisman and Klemp (1982) sounding under Bellwether conventions, team reference procedure (see file header)
     closePercent(f.mucape, 2404, 1);
     expect(Math.abs(f.mucin! - -0.3)).toBeLessThan(1);
     expect(Math.abs(f.muel_hgt! - 12035)).toBeLessThan(10);
@@ -49,10 +52,12 @@ describe("Weisman-Klemp (1982) sounding, qv0 = 14 g/kg", () => {
   });
 
   it("surface θe is 341.21 K", () => {
+    // Source: Weisman and Klemp (1982) sounding under Bellwether conventions, team reference procedure (see file header)
     expect(f.thetae_sfc!).toBeCloseTo(341.21, 1);
   });
 
   it("SB CAPE without the virtual-temperature correction is 1745 J/kg", () => {
+    // Source: Weisman and Klemp (1982) sounding under Bellwether conventions, team reference procedure (see file header)
     const dry = diagnoseColumn(profile, { virtualCorrection: false });
     closePercent(dry.fields.sbcape, 1745, 1);
     expect(Math.abs(dry.fields.sbcin! - -47.6)).toBeLessThan(1);
@@ -64,12 +69,14 @@ describe("Weisman-Klemp (1982) sounding, qv0 = 14 g/kg", () => {
     [0.016, 2984],
   ] as const) {
     it(`SB CAPE for qv0 = ${qv0 * 1000} g/kg is ${cape} J/kg`, () => {
+    // Source: Weisman and Klemp (1982) sounding under Bellwether conventions, team reference procedure (see file header)
       const result = diagnoseColumn(weismanKlempProfile({ qv0, dz: 50, top: 16000 }));
       closePercent(result.fields.sbcape, cape, 1);
     });
   }
 
   it("effective inflow layer 0-3080 m, ESRH 115.5, EBWD 30 m/s, scp_eff 5.55 (integration case)", () => {
+    // Source: Weisman and Klemp (1982) sounding under Bellwether conventions, team reference procedure (see file header)
     expect(f.eff_present).toBe(1);
     expect(f.eff_base_hgt).toBe(0);
     expect(Math.abs(f.eff_top_hgt! - 3080)).toBeLessThan(10);
