@@ -17,7 +17,7 @@ export function AccountStatusDialog({ user, onClose }: { user: UserDto; onClose:
       { id: user.id, changes: { disabled: disabling } },
       {
         onSuccess: (updated) => {
-          toast.success(disabling ? "Account disabled" : "Account enabled", `${updated.displayName} (${updated.username})`);
+          toast.success(disabling ? "Account disabled" : "Account enabled", `${updated.displayName} · ${updated.username}`);
           onClose();
         },
         onError: (error) => toast.error(disabling ? "Account not disabled" : "Account not enabled", describeErrorLine(error)),

@@ -1,3 +1,4 @@
+import { useState } from "react";
 import { Controller, useForm } from "react-hook-form";
 import { zodResolver } from "@hookform/resolvers/zod";
 import { createUserInput, type CreateUserInput } from "@shared/api/users.ts";
@@ -20,32 +21,38 @@ export function CreateAccountDialog({ open, onClose }: { open: boolean; onClose:
   const toast = useToast();
   const form = useForm({ resolver: zodResolver(createUserInput), defaultValues: EMPTY });
   const { errors } = form.formState;
+  // A failure that no single field explains, shown above the buttons.
+  const [generalError, setGeneralError] = useState<unknown>(null);
 
   const close = () => {
     form.reset(EMPTY);
     createUser.reset();
+    setGeneralError(null);
     onClose();
   };
 
-  const submit = form.handleSubmit((input) =>
+  const submit = form.handleSubmit((input) => {
+    setGeneralError(null);
     createUser.mutate(input, {
       onSuccess: (user) => {
-        toast.success("Account created", `${user.displayName} (${user.username}) can now sign in.`);
+        toast.success("Account created", `${user.displayName} can now sign in as ${user.username}.`);
         close();
       },
       onError: (error) => {
         toast.error("Account not created", describeErrorLine(error));
         // Put the server's field messages (e.g. a username already in use) beside the fields.
         const fieldErrors = fieldErrorsFromApiError(error);
+        if (isApiError(error) && error.status === 409 && !fieldErrors.username) fieldErrors.username = error.message;
+        let placed = false;
         for (const field of FIELDS) {
-          if (fieldErrors[field]) form.setError(field, { message: fieldErrors[field] });
+          if (!fieldErrors[field]) continue;
+          form.setError(field, { message: fieldErrors[field] });
+          placed = true;
         }
-        if (isApiError(error) && error.status === 409 && !fieldErrors.username) {
-          form.setError("username", { message: error.message });
-        }
+        if (!placed) setGeneralError(error);
       },
-    }),
-  );
+    });
+  });
 
   return (
     <Dialog open={open} onClose={close} title="New account" description="The person signs in with this username and password.">
@@ -65,7 +72,7 @@ export function CreateAccountDialog({ open, onClose }: { open: boolean; onClose:
           name="roles"
           render={({ field, fieldState }) => <RoleCheckboxes value={field.value} onChange={field.onChange} error={fieldState.error?.message} />}
         />
-        {createUser.isError && <Notice tone="danger">{describeError(createUser.error).message}</Notice>}
+        {generalError != null && <Notice tone="danger">{describeError(generalError).message}</Notice>}
         <div className="mt-1 flex justify-end gap-2">
           <Button onClick={close}>Cancel</Button>
           <Button type="submit" variant="primary" disabled={createUser.isPending}>

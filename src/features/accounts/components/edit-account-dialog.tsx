@@ -43,7 +43,7 @@ export function EditAccountDialog({ user, isSelf, onClose }: { user: UserDto; is
       { id: user.id, changes },
       {
         onSuccess: (updated) => {
-          toast.success("Account updated", `${updated.displayName} (${updated.username})`);
+          toast.success("Account updated", `${updated.displayName} · ${updated.username}`);
           onClose();
         },
         onError: (error) => toast.error("Account not updated", describeErrorLine(error)),
