@@ -4,6 +4,7 @@
  * slice to SI values in Bellwether's canonical layout.
  */
 import type { GridGeometry } from "../../../shared/grid/geometry-types.ts";
+import { geometryKey } from "../../../shared/grid/geometry-key.ts";
 import { NetcdfDecodeError } from "./errors.ts";
 import { elementCount, textAttribute, type RawDataset, type RawVariable } from "./raw-dataset.ts";
 import { auxiliaryCoordinateNames, axisRole, coordinateVariable, dataVariableNames, gridMappingName, isLatitude, isLongitude, type AxisRole } from "./cf-axes.ts";
@@ -33,27 +34,44 @@ class SkipVariable extends Error {}
 
 export function interpretCfDataset(dataset: RawDataset): NetcdfDataset {
   const grids = new Map<string, HorizontalGrid>();
-  const geometries = new Map<string, GridGeometry>();
   const fallbackRunTime = datasetReferenceTime(dataset);
   const variables: NetcdfVariable[] = [];
   const skipped: SkippedVariable[] = [];
   for (const name of dataVariableNames(dataset)) {
     const variable = dataset.variables.get(name)!;
     try {
-      variables.push(decodeVariable(dataset, variable, grids, geometries, fallbackRunTime));
+      variables.push(decodeVariable(dataset, variable, grids, fallbackRunTime));
     } catch (error) {
       if (!(error instanceof SkipVariable)) throw error;
       skipped.push({ name, reason: error.message });
     }
   }
-  return { format: dataset.format, variables, skipped };
+  shareGeometries(variables);
+  return { format: dataset.format, globalAttributes: Object.fromEntries(dataset.attributes), variables, skipped };
+}
+
+/**
+ * Variables on the same grid share one geometry object. A projected grid that carries
+ * grid-relative wind components (x_wind, y_wind) gets uvRelativeToGrid = true, as a GRIB2 grid
+ * definition would; frame assembly then rotates those winds to east/north.
+ */
+function shareGeometries(variables: NetcdfVariable[]): void {
+  const shared = new Map<string, GridGeometry>();
+  for (const variable of variables) {
+    const key = geometryKey(variable.geometry);
+    const gridRelative =
+      variable.geometry.kind !== "latlon" && variable.standardName !== null && GRID_RELATIVE_WIND_NAMES.has(variable.standardName);
+    const existing = shared.get(key);
+    if (!existing) shared.set(key, { ...variable.geometry, uvRelativeToGrid: gridRelative });
+    else if (gridRelative && !existing.uvRelativeToGrid) shared.set(key, { ...existing, uvRelativeToGrid: true });
+  }
+  for (const variable of variables) variable.geometry = shared.get(geometryKey(variable.geometry))!;
 }
 
 function decodeVariable(
   dataset: RawDataset,
   variable: RawVariable,
   grids: Map<string, HorizontalGrid>,
-  geometries: Map<string, GridGeometry>,
   fallbackRunTime: string | null,
 ): NetcdfVariable {
   const plan = planVariable(dataset, variable);
@@ -61,7 +79,6 @@ function decodeVariable(
   const ny = variable.shape[plan.yAxis];
   const grid = gridFor(dataset, variable, plan, nx, ny, grids);
   const standardName = textAttribute(variable.attributes, "standard_name") ?? null;
-  const geometry = geometryFor(grid.geometry, standardName, geometries);
 
   const vertical = verticalLevels(plan.levelCoordinate);
   if ("unsupported" in vertical) throw new SkipVariable(vertical.unsupported);
@@ -106,7 +123,7 @@ function decodeVariable(
     units: conversion.unit,
     sourceUnits,
     dims: [...variable.dimensions],
-    geometry,
+    geometry: grid.geometry,
     levelType: vertical.levelType,
     levels: vertical.levels,
     times,
@@ -223,18 +240,6 @@ function gridFor(dataset: RawDataset, variable: RawVariable, plan: VariablePlan,
   });
   grids.set(key, grid);
   return grid;
-}
-
-/** One shared geometry object per grid and wind flag, so equal grids compare equal cheaply. */
-function geometryFor(base: GridGeometry, standardName: string | null, geometries: Map<string, GridGeometry>): GridGeometry {
-  const gridRelative = base.kind !== "latlon" && standardName !== null && GRID_RELATIVE_WIND_NAMES.has(standardName);
-  const key = `${JSON.stringify(base)}|${gridRelative}`;
-  let geometry = geometries.get(key);
-  if (!geometry) {
-    geometry = { ...base, uvRelativeToGrid: gridRelative };
-    geometries.set(key, geometry);
-  }
-  return geometry;
 }
 
 /** The file's model run when variables do not name one: a single forecast reference time variable. */

@@ -14,8 +14,12 @@ export interface NetcdfVariable {
   sourceUnits: string | null;
   /** The variable's dimension names in file order. */
   dims: string[];
-  /** Geometry of `values`; `uvRelativeToGrid` is true only for grid-relative wind components (x_wind, y_wind). */
+  /**
+   * Geometry of `values`, one object shared by every variable on the same grid. On a projected
+   * grid `uvRelativeToGrid` is true when the file holds grid-relative winds (x_wind, y_wind).
+   */
   geometry: GridGeometry;
+  /** "surface" stands for any single-level field without a vertical coordinate (mean sea level included). */
   levelType: NetcdfLevelType;
   /** Pa for isobaric, metres above ground for heightAboveGround, null for a single surface field. */
   levels: number[] | null;
@@ -36,6 +40,8 @@ export interface SkippedVariable {
 
 export interface NetcdfDataset {
   format: "netcdf3" | "netcdf4";
+  /** Global attributes (text, or numbers as arrays), e.g. title, source, institution. */
+  globalAttributes: Record<string, string | readonly number[]>;
   variables: NetcdfVariable[];
   /** Gridded variables that were left out, with the reason (an unsupported vertical coordinate, say). */
   skipped: SkippedVariable[];

@@ -160,11 +160,21 @@ describe("Lambert conformal file with x/y in km", () => {
     }
   });
 
-  it("marks grid-relative wind components and no others", () => {
+  it("marks the grid as carrying grid-relative winds, on one geometry shared by all its variables", () => {
     // Source: CF standard names x_wind/y_wind are along the grid axes (CF standard name table).
     expect(variable(dataset, "x_wind").geometry.uvRelativeToGrid).toBe(true);
-    expect(variable(dataset, "y_wind").geometry.uvRelativeToGrid).toBe(true);
-    expect(variable(dataset, "cape").geometry.uvRelativeToGrid).toBe(false);
+    expect(variable(dataset, "cape").geometry).toBe(variable(dataset, "x_wind").geometry);
+  });
+
+  it("keeps the flag off on a projected grid without grid-relative winds", async () => {
+    const polar = await decodeNetcdf(readFixture("polar-nc4.nc"));
+    // Source: polar-nc4.cdl holds wind_speed only, no x_wind/y_wind.
+    expect(polar.variables[0].geometry.uvRelativeToGrid).toBe(false);
+  });
+
+  it("exposes the global attributes", () => {
+    // Source: CDL global attribute :Conventions = "CF-1.8".
+    expect(dataset.globalAttributes.Conventions).toBe("CF-1.8");
   });
 
   it("flips y, reads minutes since an ISO date and seconds since 1970", () => {
