@@ -13,5 +13,11 @@ export function unpackCcsds(payload: Uint8Array, scale: PackingScale, ccsds: Ccs
   const integers = new Float64Array(scale.valueCount);
   decodeRice(payload, settings, integers);
   const { offset, factor } = linearScale(scale);
-  for (let k = 0; k < integers.length; k++) out[k] = offset + integers[k] * factor;
+  // GRIB2 packs unsigned integers. With the "signed" option the coder only treats them as two's complement
+  // while predicting, so a negative sample is the same bit pattern as an unsigned value 2^n higher.
+  const wrap = 2 ** scale.bitsPerValue;
+  for (let k = 0; k < integers.length; k++) {
+    const x = integers[k];
+    out[k] = offset + (x < 0 ? x + wrap : x) * factor;
+  }
 }
