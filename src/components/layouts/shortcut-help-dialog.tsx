@@ -14,32 +14,27 @@ function Keys({ keys }: { keys: readonly string[] }) {
   );
 }
 
+/** Keys that do not come from the navigation list. */
+const OTHER_SHORTCUTS: ReadonlyArray<{ label: string; keys: readonly string[] }> = [
+  { label: "Show this list", keys: ["?"] },
+  { label: "Close a dialog", keys: ["Esc"] },
+];
+
 export function ShortcutHelpDialog({ open, onClose, items }: { open: boolean; onClose: () => void; items: readonly NavItem[] }) {
+  const rows = [...items.map((item) => ({ label: `Go to ${item.label}`, keys: [CHORD_PREFIX, item.shortcut] })), ...OTHER_SHORTCUTS];
   return (
     <Dialog open={open} onClose={onClose} title="Keyboard shortcuts" description="Shortcuts do nothing while you are typing in a field." width="sm">
       <table className="w-full">
         <caption className="sr-only">Keyboard shortcuts</caption>
         <tbody>
-          {items.map((item) => (
-            <tr key={item.id} className="border-b border-line last:border-0">
-              <td className="py-1.5">Go to {item.label}</td>
+          {rows.map((row) => (
+            <tr key={row.label} className="border-b border-line last:border-0">
+              <td className="py-1.5">{row.label}</td>
               <td className="py-1.5">
-                <Keys keys={[CHORD_PREFIX, item.shortcut]} />
+                <Keys keys={row.keys} />
               </td>
             </tr>
           ))}
-          <tr>
-            <td className="py-1.5">Show this list</td>
-            <td className="py-1.5">
-              <Keys keys={["?"]} />
-            </td>
-          </tr>
-          <tr>
-            <td className="py-1.5">Close a dialog</td>
-            <td className="py-1.5">
-              <Keys keys={["Esc"]} />
-            </td>
-          </tr>
         </tbody>
       </table>
     </Dialog>

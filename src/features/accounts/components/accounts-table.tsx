@@ -2,6 +2,7 @@ import { createColumnHelper, tableFeatures, useTable } from "@tanstack/react-tab
 import type { UserDto } from "@shared/api/auth.ts";
 import { Button } from "@/components/ui/button.tsx";
 import { Chip } from "@/components/ui/chip.tsx";
+import { DataTableHead } from "@/components/ui/data-table-head.tsx";
 import { RoleChips } from "@/components/ui/role-chips.tsx";
 import { Timestamp } from "@/components/ui/timestamp.tsx";
 
@@ -84,17 +85,7 @@ export function AccountsTable({ users, currentUserId, onAction }: { users: UserD
     <div className="overflow-x-auto rounded-md border border-line bg-surface">
       <table className="w-full text-left">
         <caption className="sr-only">Accounts</caption>
-        <thead className="border-b border-line bg-raised text-xs text-muted">
-          {table.getHeaderGroups().map((group) => (
-            <tr key={group.id}>
-              {group.headers.map((header) => (
-                <th key={header.id} scope="col" className="px-3 py-2 font-medium">
-                  {header.isPlaceholder ? null : <table.FlexRender header={header} />}
-                </th>
-              ))}
-            </tr>
-          ))}
-        </thead>
+        <DataTableHead table={table} />
         <tbody>
           {table.getRowModel().rows.map((row) => (
             <tr key={row.id} className={`border-b border-line last:border-0 ${row.original.disabled ? "text-muted" : ""}`}>

@@ -2,13 +2,12 @@ import { useState } from "react";
 import { Controller, useForm } from "react-hook-form";
 import { zodResolver } from "@hookform/resolvers/zod";
 import { createUserInput, type CreateUserInput } from "@shared/api/users.ts";
-import { Button } from "@/components/ui/button.tsx";
 import { Dialog } from "@/components/ui/dialog.tsx";
-import { Notice } from "@/components/ui/notice.tsx";
+import { FormFooter } from "@/components/ui/form-footer.tsx";
 import { TextField } from "@/components/ui/text-field.tsx";
 import { useToast } from "@/components/ui/toaster.tsx";
 import { isApiError } from "@/lib/api-client.ts";
-import { describeError, describeErrorLine } from "@/lib/describe-error.ts";
+import { describeErrorLine } from "@/lib/describe-error.ts";
 import { fieldErrorsFromApiError } from "@/lib/form-errors.ts";
 import { useCreateUser } from "../api/create-user.ts";
 import { RoleCheckboxes } from "./role-checkboxes.tsx";
@@ -72,13 +71,7 @@ export function CreateAccountDialog({ open, onClose }: { open: boolean; onClose:
           name="roles"
           render={({ field, fieldState }) => <RoleCheckboxes value={field.value} onChange={field.onChange} error={fieldState.error?.message} />}
         />
-        {generalError != null && <Notice tone="danger">{describeError(generalError).message}</Notice>}
-        <div className="mt-1 flex justify-end gap-2">
-          <Button onClick={close}>Cancel</Button>
-          <Button type="submit" variant="primary" disabled={createUser.isPending}>
-            {createUser.isPending ? "Creating…" : "Create account"}
-          </Button>
-        </div>
+        <FormFooter error={generalError} pending={createUser.isPending} submitLabel="Create account" pendingLabel="Creating…" onCancel={close} />
       </form>
     </Dialog>
   );

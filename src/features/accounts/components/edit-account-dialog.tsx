@@ -2,12 +2,11 @@ import { Controller, useForm } from "react-hook-form";
 import { zodResolver } from "@hookform/resolvers/zod";
 import type { UserDto } from "@shared/api/auth.ts";
 import { createUserInput, type UpdateUserInput } from "@shared/api/users.ts";
-import { Button } from "@/components/ui/button.tsx";
 import { Dialog } from "@/components/ui/dialog.tsx";
-import { Notice } from "@/components/ui/notice.tsx";
+import { FormFooter } from "@/components/ui/form-footer.tsx";
 import { TextField } from "@/components/ui/text-field.tsx";
 import { useToast } from "@/components/ui/toaster.tsx";
-import { describeError, describeErrorLine } from "@/lib/describe-error.ts";
+import { describeErrorLine } from "@/lib/describe-error.ts";
 import { useUpdateUser } from "../api/update-user.ts";
 import { RoleCheckboxes } from "./role-checkboxes.tsx";
 
@@ -63,13 +62,7 @@ export function EditAccountDialog({ user, isSelf, onClose }: { user: UserDto; is
           )}
         />
         {lockedRoles.length > 0 && <p className="text-xs text-muted">You cannot remove your own administrator role.</p>}
-        {updateUser.isError && <Notice tone="danger">{describeError(updateUser.error).message}</Notice>}
-        <div className="mt-1 flex justify-end gap-2">
-          <Button onClick={onClose}>Cancel</Button>
-          <Button type="submit" variant="primary" disabled={updateUser.isPending}>
-            {updateUser.isPending ? "Saving…" : "Save changes"}
-          </Button>
-        </div>
+        <FormFooter error={updateUser.error} pending={updateUser.isPending} submitLabel="Save changes" pendingLabel="Saving…" onCancel={onClose} />
       </form>
     </Dialog>
   );

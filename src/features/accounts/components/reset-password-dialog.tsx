@@ -3,12 +3,11 @@ import { zodResolver } from "@hookform/resolvers/zod";
 import { z } from "zod";
 import type { UserDto } from "@shared/api/auth.ts";
 import { resetPasswordInput } from "@shared/api/users.ts";
-import { Button } from "@/components/ui/button.tsx";
 import { Dialog } from "@/components/ui/dialog.tsx";
-import { Notice } from "@/components/ui/notice.tsx";
+import { FormFooter } from "@/components/ui/form-footer.tsx";
 import { TextField } from "@/components/ui/text-field.tsx";
 import { useToast } from "@/components/ui/toaster.tsx";
-import { describeError, describeErrorLine } from "@/lib/describe-error.ts";
+import { describeErrorLine } from "@/lib/describe-error.ts";
 import { useResetPassword } from "../api/reset-password.ts";
 
 // The server's password rule plus a second entry to catch typing slips.
@@ -47,13 +46,7 @@ export function ResetPasswordDialog({ user, onClose }: { user: UserDto; onClose:
           {...form.register("password")}
         />
         <TextField label="Repeat the new password" type="password" autoComplete="new-password" error={errors.confirm?.message} {...form.register("confirm")} />
-        {resetPassword.isError && <Notice tone="danger">{describeError(resetPassword.error).message}</Notice>}
-        <div className="mt-1 flex justify-end gap-2">
-          <Button onClick={onClose}>Cancel</Button>
-          <Button type="submit" variant="primary" disabled={resetPassword.isPending}>
-            {resetPassword.isPending ? "Saving…" : "Set password"}
-          </Button>
-        </div>
+        <FormFooter error={resetPassword.error} pending={resetPassword.isPending} submitLabel="Set password" pendingLabel="Saving…" onCancel={onClose} />
       </form>
     </Dialog>
   );

@@ -1,6 +1,7 @@
 import { Fragment, useState } from "react";
 import { createColumnHelper, tableFeatures, useTable } from "@tanstack/react-table";
 import type { AuditEntryDto } from "@shared/api/audit.ts";
+import { DataTableHead } from "@/components/ui/data-table-head.tsx";
 import { Timestamp } from "@/components/ui/timestamp.tsx";
 import { AuditEntryDetail } from "./audit-entry-detail.tsx";
 
@@ -78,17 +79,7 @@ export function AuditTable({ entries }: { entries: AuditEntryDto[] }) {
     <div className="overflow-x-auto rounded-md border border-line bg-surface">
       <table className="w-full text-left">
         <caption className="sr-only">Audit trail entries, newest first</caption>
-        <thead className="border-b border-line bg-raised text-xs text-muted">
-          {table.getHeaderGroups().map((group) => (
-            <tr key={group.id}>
-              {group.headers.map((header) => (
-                <th key={header.id} scope="col" className="px-3 py-2 font-medium whitespace-nowrap">
-                  {header.isPlaceholder ? null : <table.FlexRender header={header} />}
-                </th>
-              ))}
-            </tr>
-          ))}
-        </thead>
+        <DataTableHead table={table} />
         <tbody>
           {table.getRowModel().rows.length === 0 && (
             <tr>
