@@ -4,6 +4,7 @@
  */
 import type { GridGeometry } from "./geometry-types.ts";
 import { geometryKey } from "./geometry-key.ts";
+import { BoundedCache } from "./bounded-cache.ts";
 import { projectionForGeometry, type GeoPoint, type GridPoint } from "./projection.ts";
 import { wrapLongitudeDegrees } from "./earth-constants.ts";
 
@@ -16,27 +17,11 @@ export interface GridCoordinates {
   readonly lon: Float32Array;
 }
 
-// Bounded so a long-running server that sees many grids does not keep them all.
-const MAX_CACHED_GRIDS = 16;
-const coordinateCache = new Map<string, GridCoordinates>();
+const coordinateCache = new BoundedCache<GridCoordinates>(16);
 
 /** Lat/lon arrays for a geometry, computed on first use and then served from a small cache. */
 export function gridCoordinates(geometry: GridGeometry): GridCoordinates {
-  const key = geometryKey(geometry);
-  const cached = coordinateCache.get(key);
-  if (cached) {
-    // Refresh recency: Map iteration order is insertion order.
-    coordinateCache.delete(key);
-    coordinateCache.set(key, cached);
-    return cached;
-  }
-  const computed = computeGridCoordinates(geometry);
-  coordinateCache.set(key, computed);
-  if (coordinateCache.size > MAX_CACHED_GRIDS) {
-    const oldest = coordinateCache.keys().next().value;
-    if (oldest !== undefined) coordinateCache.delete(oldest);
-  }
-  return computed;
+  return coordinateCache.getOrBuild(geometryKey(geometry), () => computeGridCoordinates(geometry));
 }
 
 function computeGridCoordinates(geometry: GridGeometry): GridCoordinates {
