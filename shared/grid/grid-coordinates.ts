@@ -5,7 +5,7 @@
 import type { GridGeometry } from "./geometry-types.ts";
 import { geometryKey } from "./geometry-key.ts";
 import { BoundedCache } from "./bounded-cache.ts";
-import { projectionForGeometry, type GeoPoint, type GridPoint } from "./projection.ts";
+import { projectionForGeometry, type GeoPoint, type GridPoint, type GridProjection } from "./projection.ts";
 import { wrapLongitudeDegrees } from "./earth-constants.ts";
 
 export { geometryKey } from "./geometry-key.ts";
@@ -18,6 +18,8 @@ export interface GridCoordinates {
 }
 
 const coordinateCache = new BoundedCache<GridCoordinates>(16);
+// Projections are cheap but not free (cone constants, the grid origin); lookups repeat them.
+const projectionCache = new BoundedCache<GridProjection>(16);
 
 /** Lat/lon arrays for a geometry, computed on first use and then served from a small cache. */
 export function gridCoordinates(geometry: GridGeometry): GridCoordinates {
@@ -59,7 +61,8 @@ export interface NearestGridPoint {
  */
 export function nearestGridPoint(geometry: GridGeometry, latDeg: number, lonDeg: number): NearestGridPoint | null {
   if (!Number.isFinite(latDeg) || !Number.isFinite(lonDeg)) return null;
-  const fractional: GridPoint = projectionForGeometry(geometry).latLonToGrid(latDeg, lonDeg, { i: 0, j: 0 });
+  const projection = projectionCache.getOrBuild(geometryKey(geometry), () => projectionForGeometry(geometry));
+  const fractional: GridPoint = projection.latLonToGrid(latDeg, lonDeg, { i: 0, j: 0 });
   if (!Number.isFinite(fractional.i) || !Number.isFinite(fractional.j)) return null;
   let i = Math.round(fractional.i);
   const j = Math.round(fractional.j);

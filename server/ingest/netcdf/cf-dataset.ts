@@ -37,15 +37,21 @@ export function interpretCfDataset(dataset: RawDataset): NetcdfDataset {
   const fallbackRunTime = datasetReferenceTime(dataset);
   const variables: NetcdfVariable[] = [];
   const skipped: SkippedVariable[] = [];
+  let firstUnplaced: NetcdfDecodeError | undefined;
   for (const name of dataVariableNames(dataset)) {
     const variable = dataset.variables.get(name)!;
     try {
       variables.push(decodeVariable(dataset, variable, grids, fallbackRunTime));
     } catch (error) {
-      if (!(error instanceof SkipVariable)) throw error;
+      // A side variable with no horizontal coordinates (a station series, say) should not sink the
+      // file; it only becomes an error when nothing in the file can be placed on a grid.
+      const unplaced = error instanceof NetcdfDecodeError && error.code === "missing-coordinates";
+      if (!(error instanceof SkipVariable) && !unplaced) throw error;
+      if (unplaced) firstUnplaced ??= error;
       skipped.push({ name, reason: error.message });
     }
   }
+  if (variables.length === 0 && firstUnplaced) throw firstUnplaced;
   shareGeometries(variables);
   return { format: dataset.format, globalAttributes: Object.fromEntries(dataset.attributes), variables, skipped };
 }

@@ -176,3 +176,18 @@ describe("values and levels", () => {
     expectError(() => interpretCfDataset(dataset), "bad-time", /360_day/);
   });
 });
+
+describe("variables without horizontal coordinates", () => {
+  it("are skipped when other variables can be placed", () => {
+    const dataset = memoryDataset([
+      memoryVariable("lat", { lat: 2 }, [0, 1], { units: "degrees_north" }),
+      memoryVariable("lon", { lon: 2 }, [0, 1], { units: "degrees_east" }),
+      memoryVariable("field", { lat: 2, lon: 2 }, [1, 2, 3, 4], { units: "K" }),
+      memoryVariable("station_series", { station: 3, sample: 2 }, [1, 2, 3, 4, 5, 6], { units: "K" }),
+    ]);
+    const decoded = interpretCfDataset(dataset);
+    // Common practice (no source): one unplaceable side variable does not reject a usable file.
+    expect(decoded.variables.map((v) => v.name)).toEqual(["field"]);
+    expect(decoded.skipped).toEqual([{ name: "station_series", reason: expect.stringMatching(/x and y/) }]);
+  });
+});
