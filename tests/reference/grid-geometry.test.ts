@@ -214,7 +214,7 @@ describe("wind rotation", () => {
     const u = Float32Array.of(10);
     const v = Float32Array.of(0);
     rotateEarthToGrid(u, v, Float32Array.of(theta));
-    // Source: computed independently by the team's science reference scripts (rotation of §7.7).
+    // Source: u_g = u_e cos θ − v_e sin θ, v_g = u_e sin θ + v_e cos θ; values computed independently by the team's science reference scripts.
     expect(u[0]).toBeCloseTo(9.7648, 4);
     expect(v[0]).toBeCloseTo(2.1559, 4);
     rotateGridToEarth(u, v, Float32Array.of(theta));
