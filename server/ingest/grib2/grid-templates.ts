@@ -121,7 +121,6 @@ function readLambert(bytes: Uint8Array, o: number, earth: EarthShape, where: Gri
   const lat1 = readSignedInt32(bytes, o + 38) * MICRO_DEGREES;
   const lon1 = readSignedInt32(bytes, o + 42) * MICRO_DEGREES;
   const flags = bytes[o + 46];
-  const latD = readSignedInt32(bytes, o + 47) * MICRO_DEGREES;
   const lonV = wrapLongitude(readSignedInt32(bytes, o + 51) * MICRO_DEGREES);
   const dx = readUint32(bytes, o + 55) * MILLIMETRES;
   const dy = readUint32(bytes, o + 59) * MILLIMETRES;
@@ -130,9 +129,9 @@ function readLambert(bytes: Uint8Array, o: number, earth: EarthShape, where: Gri
   const latin1 = readSignedInt32(bytes, o + 65) * MICRO_DEGREES;
   const latin2 = readSignedInt32(bytes, o + 69) * MICRO_DEGREES;
   if (centre & 0x40) throw new Grib2DecodeError(where, "bipolar Lambert projections (projection centre flag bit 2) are not supported");
-  // LaD (where Dx and Dy are given) is taken to be a standard parallel, as in the grids models write; the
-  // projection maths elsewhere treats Dx and Dy as lengths on the projection plane.
-  const params: ProjectedGridParams = { kind: "lambert", latin1, latin2, latD, lonV, earthRadius: earth.sphereRadius };
+  // LaD (octets 48-51, where Dx and Dy are given) is taken to be a standard parallel, as in the grids models
+  // write, so Dx and Dy are used as lengths on the projection plane.
+  const params: ProjectedGridParams = { kind: "lambert", latin1, latin2, lonV, earthRadius: earth.sphereRadius };
   const corner = southWestCorner(params, scan, lat1, lon1, nx, ny, dx, dy);
   const geometry: LambertGeometry = {
     kind: "lambert",
