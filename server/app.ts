@@ -13,6 +13,7 @@ import type { RouteEntry } from "./http/route-table.ts";
 import type { Services } from "./services/container.ts";
 import { createGridsRouter } from "./routes/grids.router.ts";
 import { createEventsRouter } from "./routes/events.router.ts";
+import { createSoundingsRouter } from "./routes/soundings.router.ts";
 import { createHealthRouter } from "./routes/health.router.ts";
 import { createAuthRouter } from "./routes/auth.router.ts";
 import { createUsersRouter } from "./routes/users.router.ts";
@@ -81,12 +82,13 @@ export function createApp(deps: AppDeps): BellwetherApp {
     createGridsRouter({ dataSource, dataDir: config.dataDir, ingest: services.ingest, grids: services.grids, uploadMaxBytes: config.GRID_UPLOAD_MAX_MB * 1024 * 1024 }, routes),
   );
   app.use("/api/events", createEventsRouter(services.events, routes));
+  app.use("/api/soundings", createSoundingsRouter(routes));
   app.use("/api", apiNotFound);
 
   if (deps.clientDir && fs.existsSync(path.join(deps.clientDir, "index.html"))) {
     const clientDir = deps.clientDir;
     app.use(express.static(clientDir, { index: false, maxAge: "1h" }));
-    app.get("/*splat", (_req, res) => res.sendFile(path.join(clientDir, "index.html")));
+    app.get("/{*splat}", (_req, res) => res.sendFile(path.join(clientDir, "index.html")));
   }
 
   app.use(errorHandler);

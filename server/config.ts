@@ -11,6 +11,8 @@ const configSchema = z.object({
   HOST: z.string().min(1).default("127.0.0.1"),
   DATA_DIR: z.string().min(1).default("./data"),
   DEMO: boolFromEnv.default(true),
+  /** With DEMO: also drop the invented demo model run into the inbox of a new database. */
+  DEMO_GRIDS: boolFromEnv.default(true),
   DEMO_PASSWORD: z.string().min(8, "DEMO_PASSWORD needs at least 8 characters").default("bellwether-demo"),
   ADMIN_USERNAME: z.string().min(2).optional(),
   ADMIN_PASSWORD: z.string().min(10, "ADMIN_PASSWORD needs at least 10 characters").optional(),

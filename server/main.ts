@@ -14,6 +14,8 @@ import { createApp } from "./app.ts";
 import { isNewDatabase, seedDemoAccounts, seedFirstAdmin } from "./demo/seed.ts";
 import { startScheduler, type Scheduler } from "../jobs/scheduler.ts";
 import { createServices, type Services } from "./services/container.ts";
+import { dropDemoRun } from "./demo/drop-demo-run.ts";
+import { defaultDemoRun } from "./demo/demo-run.ts";
 
 export const CLIENT_DIR = fileURLToPath(new URL("../dist/client", import.meta.url));
 
@@ -35,7 +37,8 @@ export async function startBellwether(overrides: Partial<Record<string, string>>
   fs.mkdirSync(config.dataDir, { recursive: true });
   const dataSource = await openDatabase({ database: config.databaseFile });
 
-  if (await isNewDatabase(dataSource)) {
+  const newDatabase = await isNewDatabase(dataSource);
+  if (newDatabase) {
     if (config.ADMIN_USERNAME && config.ADMIN_PASSWORD) {
       await seedFirstAdmin(dataSource, config.ADMIN_USERNAME, config.ADMIN_PASSWORD, config.BCRYPT_COST);
       logger.info({ username: config.ADMIN_USERNAME }, "first-run administrator created");
@@ -60,6 +63,13 @@ export async function startBellwether(overrides: Partial<Record<string, string>>
   const scheduler: Scheduler | null = config.JOBS ? startScheduler({ dataSource, logger, services }) : null;
   const url = `http://${config.HOST === "0.0.0.0" ? "127.0.0.1" : config.HOST}:${port}`;
   logger.info({ url }, "Bellwether is serving");
+  if (newDatabase && config.DEMO && config.DEMO_GRIDS) {
+    // The invented demo run lands in the inbox like real model output, a file per forecast hour.
+    dropDemoRun(config.inboxDir, defaultDemoRun(new Date())).then(
+      (files) => logger.info({ files: files.length, inbox: config.inboxDir }, "demo model run dropped into the inbox"),
+      (err) => logger.error({ err }, "could not write the demo model run"),
+    );
+  }
 
   let closing: Promise<void> | null = null;
   const close = () =>

@@ -74,7 +74,7 @@ export class ColumnDiagnosticsPool {
   }
 
   /** Every column field for every point of the grid; outputs are Float32Arrays on SharedArrayBuffers. */
-  async diagnose(grid: ColumnGrid, options: ColumnOptions = {}): Promise<ColumnGridOutput> {
+  async diagnose(grid: ColumnGrid, options: ColumnOptions = {}, onProgress?: (fraction: number) => void): Promise<ColumnGridOutput> {
     validateColumnGrid(grid);
     const input = shareColumnGrid(grid);
     const output = allocateColumnGridOutput(grid.pointCount, allocateSharedFloat32);
@@ -86,6 +86,8 @@ export class ColumnDiagnosticsPool {
       const end = Math.floor(((c + 1) * n) / chunks);
       if (end > start) tasks.push(this.pool.run({ grid: input, output, options, start, end }));
     }
+    let finished = 0;
+    if (onProgress) for (const task of tasks) void task.then((count) => onProgress((finished += count) / n), () => {});
     const done = (await Promise.all(tasks)).reduce((a, b) => a + b, 0);
     if (done !== n) throw new Error(`column pool computed ${done} of ${n} columns`);
     return output;

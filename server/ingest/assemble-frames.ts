@@ -74,7 +74,9 @@ class FrameGroup {
 export function assembleFrames(records: readonly GridRecord[]): AssembledFrames {
   if (records.length === 0) throw new FrameAssemblyError("The file holds no fields.");
   const groups = new Map<string, FrameGroup>();
-  for (const r of records) {
+  for (const raw of records) {
+    // One spelling of every time, so "…T12:00:00Z" and "…T12:00:00.000Z" are the same run.
+    const r = { ...raw, runTime: canonicalTime(raw.runTime, raw), validTime: canonicalTime(raw.validTime, raw) };
     const key = `${r.model}|${r.runTime}|${r.validTime}`;
     let group = groups.get(key);
     if (!group) groups.set(key, (group = new FrameGroup(r)));
@@ -177,6 +179,12 @@ function buildFrame(group: FrameGroup): { frame: FrameInput; used: Set<GridRecor
     frame: { model, runTime, validTime, forecastHour, geometry: { ...geometry, uvRelativeToGrid: false }, levels, grid, surfaceHeightDerived: !zs },
     used,
   };
+}
+
+function canonicalTime(iso: string, record: GridRecord): string {
+  const ms = Date.parse(iso);
+  if (!Number.isFinite(ms)) throw new FrameAssemblyError(`${recordLabel(record)} carries an unreadable time "${iso}".`);
+  return new Date(ms).toISOString();
 }
 
 function intersectLevels(maps: Array<Map<number, GridRecord> | undefined>, start?: number[]): number[] {

@@ -3,6 +3,7 @@ import { allocateColumnGridOutput } from "../../shared/meteo/column/column-grid.
 import { diagnoseColumnGrid } from "../../shared/meteo/column/diagnose-grid.ts";
 import type { ColumnOptions } from "../../shared/meteo/column/column-options.ts";
 import type { ColumnDiagnoser } from "./frame-processor.ts";
+import type { ColumnDiagnosticsPool } from "../diagnostics/column-pool.ts";
 
 /**
  * Column diagnostics on the main thread in slices, yielding between slices so the server keeps
@@ -20,4 +21,9 @@ export function inProcessColumnDiagnoser(options?: ColumnOptions, sliceColumns =
     }
     return output;
   };
+}
+
+/** Column diagnostics on the worker-thread pool: every core, the server's own thread stays free. */
+export function poolColumnDiagnoser(pool: ColumnDiagnosticsPool, options?: ColumnOptions): ColumnDiagnoser {
+  return (frame, onProgress) => pool.diagnose(frame.grid, options, onProgress);
 }

@@ -1,8 +1,14 @@
 import type { GridFileFormat } from "./detect-format.ts";
 import type { GridRecord } from "./grid-record.ts";
+import { decodeGrib2, loadGrib2Codecs } from "./grib2/index.ts";
+import { grib2ToRecords } from "./grib2-records.ts";
 
-/** Decodes a grid file into format-neutral records. */
-export function decodeGridFile(_bytes: Uint8Array, format: GridFileFormat): GridRecord[] {
-  // Wired to the GRIB2 and NetCDF decoders once they land (issue 4).
-  throw new Error(`Decoding ${format} files is not wired up yet.`);
+/** Decodes a grid file into format-neutral records (SI units, canonical point order). */
+export async function decodeGridFile(bytes: Uint8Array, format: GridFileFormat): Promise<GridRecord[]> {
+  if (format === "grib2") {
+    // The JPEG 2000 codec is WebAssembly and loads once, asynchronously.
+    await loadGrib2Codecs();
+    return grib2ToRecords(decodeGrib2(bytes));
+  }
+  throw new Error("NetCDF decoding is being wired in (issue 4).");
 }

@@ -23,7 +23,7 @@ export interface FrameProcessor {
 }
 
 /** Decodes a file of a known format into format-neutral records (SI units, canonical layout). */
-export type GridDecoder = (bytes: Uint8Array, format: GridFileFormat) => GridRecord[];
+export type GridDecoder = (bytes: Uint8Array, format: GridFileFormat) => GridRecord[] | Promise<GridRecord[]>;
 
 /** Runs the column diagnostics over a frame's grid; reports the fraction done. */
 export type ColumnDiagnoser = (frame: FrameInput, onProgress: (fraction: number) => void) => Promise<ColumnGridOutput>;
@@ -58,7 +58,7 @@ export class GridFrameProcessor implements FrameProcessor {
     try {
       await progress("decoding", 0.02, `Reading ${job.format.toUpperCase()} file`);
       const bytes = new Uint8Array(fs.readFileSync(file));
-      const records = this.deps.decode(bytes, job.format as GridFileFormat);
+      const records = await this.deps.decode(bytes, job.format as GridFileFormat);
       await progress("decoding", 0.1, `Decoded ${records.length} field(s); assembling frames`);
       const { frames, ignored } = assembleFrames(records);
 

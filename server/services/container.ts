@@ -7,7 +7,9 @@ import { IngestService } from "../ingest/ingest.service.ts";
 import { GridFrameProcessor, type ColumnDiagnoser, type GridDecoder } from "../ingest/frame-processor.ts";
 import { GridQueryService } from "../grids/grid-query.service.ts";
 import { decodeGridFile } from "../ingest/decode-file.ts";
-import { inProcessColumnDiagnoser } from "../ingest/column-diagnoser.ts";
+import { inProcessColumnDiagnoser, poolColumnDiagnoser } from "../ingest/column-diagnoser.ts";
+import { ColumnDiagnosticsPool } from "../diagnostics/column-pool.ts";
+import os from "node:os";
 
 /** Every long-lived service of one running Bellwether, built once and handed to routes and jobs. */
 export interface Services {
@@ -29,12 +31,15 @@ export interface ServiceOverrides {
 
 export function createServices(config: AppConfig, dataSource: DataSource, logger: Logger, overrides: ServiceOverrides = {}): Services {
   const events = new EventBus();
+  // DIAGNOSTIC_THREADS=0 or 1 keeps the work on the main thread (tests, tiny grids).
+  const threads = config.DIAGNOSTIC_THREADS ?? os.availableParallelism();
+  const pool = !overrides.diagnoseColumns && threads > 1 ? new ColumnDiagnosticsPool({ threads }) : null;
   const processor = new GridFrameProcessor({
     dataSource,
     dataDir: config.dataDir,
     events,
     decode: overrides.decode ?? decodeGridFile,
-    diagnoseColumns: overrides.diagnoseColumns ?? inProcessColumnDiagnoser(),
+    diagnoseColumns: overrides.diagnoseColumns ?? (pool ? poolColumnDiagnoser(pool) : inProcessColumnDiagnoser()),
     onFrameReady: (frameId) => logger.info({ frameId }, "frame ready"),
   });
   const ingest = new IngestService({ dataSource, dataDir: config.dataDir, events, logger, processor });
@@ -48,6 +53,7 @@ export function createServices(config: AppConfig, dataSource: DataSource, logger
     grids: new GridQueryService(dataSource, config.dataDir),
     async close() {
       await ingest.stop();
+      await pool?.destroy();
     },
   };
 }

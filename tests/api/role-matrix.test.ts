@@ -1,4 +1,5 @@
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
+import fs from "node:fs";
 import { ROLES, PERMISSIONS, type Role } from "../../shared/auth/permissions.ts";
 import { startTestServer, signIn, anonymous, ingestBytes, DEMO_USER_FOR_ROLE, type SignedInAgent, type TestServer } from "../helpers/test-server.ts";
 import { fakeGribBytes, syntheticRecords } from "../helpers/synthetic-grid.ts";
@@ -20,6 +21,7 @@ interface Example {
 }
 
 let counter = 0;
+const SOUNDING = fs.readFileSync("tests/fixtures/soundings/demo-warm-sector.csv", "utf8");
 const EXAMPLES: Record<string, Example> = {
   "get /api/health/": { path: "/api/health" },
   "get /api/auth/csrf": { path: "/api/auth/csrf" },
@@ -43,6 +45,8 @@ const EXAMPLES: Record<string, Example> = {
   "get /api/grids/frames/:id/fields/:key": { path: "/api/grids/frames/1/fields/mlcape" },
   "get /api/grids/frames/:id/column": { path: "/api/grids/frames/1/column?lat=35&lon=-99" },
   "get /api/events/": { path: "/api/events", stream: true },
+  "post /api/soundings/diagnose": { path: "/api/soundings/diagnose", body: () => ({ csv: SOUNDING }) },
+  "post /api/soundings/report": { path: "/api/soundings/report", body: () => ({ csv: SOUNDING }) },
 };
 
 const keyOf = (r: RouteEntry) => `${r.method} ${r.path}`;
@@ -62,7 +66,7 @@ async function call(who: SignedInAgent, method: HttpMethod, example: Example) {
         if (finished) return;
         finished = true;
         done(null, null);
-        res.destroy();
+        (res as unknown as { destroy(): void }).destroy();
       };
       res.once("data", finish);
       res.once("end", finish);

@@ -28,7 +28,7 @@ export interface TestServer {
 /** A real app on a real SQLite file in a fresh temporary folder, migrated and seeded with the demo accounts. */
 export async function startTestServer(env: Record<string, string> = {}, overrides: ServiceOverrides = {}): Promise<TestServer> {
   const dataDir = fs.mkdtempSync(path.join(os.tmpdir(), "bellwether-test-"));
-  const config = loadConfig({}, { DATA_DIR: dataDir, LOG_LEVEL: "silent", DEMO_PASSWORD: TEST_PASSWORD, LOGIN_RATE_LIMIT: "1000", JOBS: "false", ...env });
+  const config = loadConfig({}, { DATA_DIR: dataDir, LOG_LEVEL: "silent", DEMO_PASSWORD: TEST_PASSWORD, LOGIN_RATE_LIMIT: "1000", JOBS: "false", DIAGNOSTIC_THREADS: "1", ...env });
   const dataSource = await openDatabase({ database: config.databaseFile });
   await seedDemoAccounts(dataSource, TEST_PASSWORD, config.BCRYPT_COST);
   const services = createServices(config, dataSource, createLogger("silent"), overrides);

@@ -1,6 +1,7 @@
 import type { CliCommand } from "../command.ts";
 import { auditCommand } from "./audit.command.ts";
 import { diagnoseCommand } from "./diagnose.command.ts";
+import { demoGridsCommand } from "./demo-grids.command.ts";
 
 /** Every CLI command by name; add a new command's file here. */
-export const COMMANDS: readonly CliCommand[] = [auditCommand, diagnoseCommand];
+export const COMMANDS: readonly CliCommand[] = [auditCommand, diagnoseCommand, demoGridsCommand];
