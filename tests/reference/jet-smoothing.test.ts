@@ -69,6 +69,15 @@ describe("Gaussian smoother response", () => {
     for (let k = 0; k < smoothed.length; k += 97) expect(smoothed[k]).toBeCloseTo(42, 4);
   });
 
+  it.each([75_000, 300_000])("keeps a linear ramp exactly linear, up to the grid edge (σ = %s m)", (sigma) => {
+    const ramp = new Float32Array(nx * ny);
+    for (let j = 0; j < ny; j++) for (let i = 0; i < nx; i++) ramp[j * nx + i] = 0.01 * i - 0.5 * j;
+    const smoothed = gaussianSmooth(grid, ramp, sigma);
+    // Source: Derived in closed form (a symmetric kernel leaves linear functions unchanged; point reflection
+    // beyond the edge continues the line)
+    for (const k of [0, 1, nx - 1, 4 * nx + 300, (ny - 1) * nx + nx - 1]) expect(smoothed[k]).toBeCloseTo(ramp[k], 3);
+  });
+
   it("keeps missing points missing and fills their neighbours from valid points only", () => {
     const holey = new Float32Array(nx * ny).fill(10);
     holey[4 * nx + 300] = Number.NaN;

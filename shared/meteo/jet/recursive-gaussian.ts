@@ -4,7 +4,7 @@
  * whose z-transform is a fourth-order rational function, so a causal pass (x ≥ 0) plus an anti-causal pass
  * (x < 0) apply it at a cost independent of σ. From memory: the eight constants below; they give g(0) = 1.000
  * and g(σ) = 0.6067 (a Gaussian: 0.6065), and the tests check the filter against the closed-form response.
- * Edges: the signal is taken as constant beyond each end (steady-state initial conditions).
+ * Ends: the passes start from steady state, as if the (possibly padded) signal stayed constant beyond them.
  */
 
 const A0 = 1.68;
@@ -56,7 +56,11 @@ export function recursiveGaussianCoefficients(sigmaSteps: number, out: Float64Ar
   out[offset + 14] = causalGain + anticausalGain;
 }
 
-/** Filters `count` samples of `source` (starting at `start`, stride 1) into `target`; `scratch` holds ≥ count values. */
+/**
+ * Filters `count` samples of `source` (from `start`, stride 1) and writes samples n ∈ [keepFrom, keepFrom +
+ * keepCount) to target[targetStart + n]; `scratch` holds ≥ count values. Padding a line and keeping only its
+ * middle lets the caller choose how the signal continues beyond the ends.
+ */
 export function recursiveGaussianLine(
   source: ArrayLike<number>,
   start: number,
@@ -65,6 +69,8 @@ export function recursiveGaussianLine(
   scratch: Float64Array,
   target: Float64Array,
   targetStart: number,
+  keepFrom = 0,
+  keepCount = count,
 ): void {
   const [p0, p1, p2, p3, q1, q2, q3, q4, a1, a2, a3, a4, causalGain, anticausalGain, norm] = c;
   const first = source[start];
@@ -91,9 +97,10 @@ export function recursiveGaussianLine(
   x1 = x2 = x3 = last;
   let x4 = last;
   y1 = y2 = y3 = y4 = last * anticausalGain;
+  const keepTo = keepFrom + keepCount;
   for (let n = count - 1; n >= 0; n--) {
     const y = a1 * x1 + a2 * x2 + a3 * x3 + a4 * x4 - q1 * y1 - q2 * y2 - q3 * y3 - q4 * y4;
-    target[targetStart + n] = (scratch[n] + y) / norm;
+    if (n >= keepFrom && n < keepTo) target[targetStart + n] = (scratch[n] + y) / norm;
     x4 = x3;
     x3 = x2;
     x2 = x1;
