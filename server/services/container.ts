@@ -6,6 +6,7 @@ import { UserService } from "./user.service.ts";
 import { IngestService } from "../ingest/ingest.service.ts";
 import { GridFrameProcessor, type ColumnDiagnoser, type GridDecoder } from "../ingest/frame-processor.ts";
 import { GridQueryService } from "../grids/grid-query.service.ts";
+import { frameExtraDiagnosers } from "../ingest/frame-diagnostics.ts";
 import { decodeGridFile } from "../ingest/decode-file.ts";
 import { inProcessColumnDiagnoser, poolColumnDiagnoser } from "../ingest/column-diagnoser.ts";
 import { ColumnDiagnosticsPool } from "../diagnostics/column-pool.ts";
@@ -40,6 +41,7 @@ export function createServices(config: AppConfig, dataSource: DataSource, logger
     events,
     decode: overrides.decode ?? decodeGridFile,
     diagnoseColumns: overrides.diagnoseColumns ?? (pool ? poolColumnDiagnoser(pool) : inProcessColumnDiagnoser()),
+    extraDiagnosers: frameExtraDiagnosers(),
     onFrameReady: (frameId) => logger.info({ frameId }, "frame ready"),
   });
   const ingest = new IngestService({ dataSource, dataDir: config.dataDir, events, logger, processor });
