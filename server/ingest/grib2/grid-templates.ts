@@ -26,8 +26,9 @@ export interface GridDefinition {
 const TEMPLATE_LENGTH: Record<number, number> = { 0: 72, 20: 65, 30: 81 };
 /** Flag Table 3.3, bit 5: u/v resolved relative to the grid's x/y directions. */
 const UV_GRID_RELATIVE = 0x08;
-const MICRO_DEGREES = 1e-6;
-const MILLIMETRES = 1e-3;
+/** Angles are stored in micro-degrees and lengths in millimetres; dividing keeps 38500000 -> 38.5 exact. */
+const fromMicroDegrees = (value: number) => value / 1e6;
+const fromMillimetres = (value: number) => value / 1e3;
 
 export function readGridDefinition(bytes: Uint8Array, span: SectionSpan, messageNumber: number): GridDefinition {
   const o = span.offset;
@@ -75,18 +76,19 @@ function readDimension(bytes: Uint8Array, at: number, label: string, where: Grib
 function readLatLon(bytes: Uint8Array, o: number, earth: EarthShape, where: Grib2ErrorLocation): ParsedGrid {
   const nx = readDimension(bytes, o + 30, "Ni (points along a parallel)", where);
   const ny = readDimension(bytes, o + 34, "Nj (points along a meridian)", where);
-  // Angles are in micro-degrees unless a basic angle and its subdivisions say otherwise (template 3.0 note 1).
+  // Angles are in micro-degrees unless a basic angle and its subdivisions say otherwise (template 3.0 notes).
   const basicAngle = readUint32(bytes, o + 38);
   const subdivisions = readUint32(bytes, o + 42);
   const useBasic = basicAngle !== 0 && !isAllOnes(bytes, o + 38, 4) && subdivisions !== 0 && !isAllOnes(bytes, o + 42, 4);
-  const unit = useBasic ? basicAngle / subdivisions : MICRO_DEGREES;
+  // Divide by the subdivisions per degree rather than multiply by their inverse, so values stay exact.
+  const perDegree = useBasic ? subdivisions / basicAngle : 1e6;
   const la1 = readSignedInt32(bytes, o + 46);
   const lo1 = readSignedInt32(bytes, o + 50);
   const flags = bytes[o + 54];
   const la2 = readSignedInt32(bytes, o + 55);
   const lo2 = readSignedInt32(bytes, o + 59);
   const scan = readScanMode(bytes[o + 71], { ...where, byteOffset: o + 71 });
-  const fullCircle = 360 / unit;
+  const fullCircle = 360 * perDegree;
 
   // Increments may be omitted (flag bits 3 and 4 clear); then they follow from the first and last points.
   const hasDi = (flags & 0x20) !== 0 && !isAllOnes(bytes, o + 63, 4);
@@ -103,12 +105,13 @@ function readLatLon(bytes: Uint8Array, o: number, earth: EarthShape, where: Grib
     ny,
     earthRadius: earth.sphereRadius,
     uvRelativeToGrid: (flags & UV_GRID_RELATIVE) !== 0,
-    lat0: southLat * unit,
-    lon0: wrapLongitude(westLon * unit),
-    dlat: dj * unit,
-    dlon: di * unit,
+    lat0: southLat / perDegree,
+    lon0: wrapLongitude(westLon / perDegree),
+    dlat: dj / perDegree,
+    dlon: di / perDegree,
   };
-  if (Math.abs(geometry.lat0) > 90 || Math.abs(geometry.lat0 + (ny - 1) * geometry.dlat) > 90 + 1e-9) {
+  const northLat = geometry.lat0 + (ny - 1) * geometry.dlat;
+  if (geometry.lat0 < -90 - 1e-6 || northLat > 90 + 1e-6) {
     throw new Grib2DecodeError(where, `latitudes run from ${geometry.lat0} by ${geometry.dlat} over ${ny} rows, beyond the poles`);
   }
   return { scan, geometry };
@@ -118,16 +121,16 @@ function readLatLon(bytes: Uint8Array, o: number, earth: EarthShape, where: Grib
 function readLambert(bytes: Uint8Array, o: number, earth: EarthShape, where: Grib2ErrorLocation): ParsedGrid {
   const nx = readDimension(bytes, o + 30, "Nx", where);
   const ny = readDimension(bytes, o + 34, "Ny", where);
-  const lat1 = readSignedInt32(bytes, o + 38) * MICRO_DEGREES;
-  const lon1 = readSignedInt32(bytes, o + 42) * MICRO_DEGREES;
+  const lat1 = fromMicroDegrees(readSignedInt32(bytes, o + 38));
+  const lon1 = fromMicroDegrees(readSignedInt32(bytes, o + 42));
   const flags = bytes[o + 46];
-  const lonV = wrapLongitude(readSignedInt32(bytes, o + 51) * MICRO_DEGREES);
-  const dx = readUint32(bytes, o + 55) * MILLIMETRES;
-  const dy = readUint32(bytes, o + 59) * MILLIMETRES;
+  const lonV = wrapLongitude(fromMicroDegrees(readSignedInt32(bytes, o + 51)));
+  const dx = fromMillimetres(readUint32(bytes, o + 55));
+  const dy = fromMillimetres(readUint32(bytes, o + 59));
   const centre = bytes[o + 63];
   const scan = readScanMode(bytes[o + 64], { ...where, byteOffset: o + 64 });
-  const latin1 = readSignedInt32(bytes, o + 65) * MICRO_DEGREES;
-  const latin2 = readSignedInt32(bytes, o + 69) * MICRO_DEGREES;
+  const latin1 = fromMicroDegrees(readSignedInt32(bytes, o + 65));
+  const latin2 = fromMicroDegrees(readSignedInt32(bytes, o + 69));
   if (centre & 0x40) throw new Grib2DecodeError(where, "bipolar Lambert projections (projection centre flag bit 2) are not supported");
   // LaD (octets 48-51, where Dx and Dy are given) is taken to be a standard parallel, as in the grids models
   // write, so Dx and Dy are used as lengths on the projection plane.
@@ -154,13 +157,13 @@ function readLambert(bytes: Uint8Array, o: number, earth: EarthShape, where: Gri
 function readPolar(bytes: Uint8Array, o: number, earth: EarthShape, where: Grib2ErrorLocation): ParsedGrid {
   const nx = readDimension(bytes, o + 30, "Nx", where);
   const ny = readDimension(bytes, o + 34, "Ny", where);
-  const lat1 = readSignedInt32(bytes, o + 38) * MICRO_DEGREES;
-  const lon1 = readSignedInt32(bytes, o + 42) * MICRO_DEGREES;
+  const lat1 = fromMicroDegrees(readSignedInt32(bytes, o + 38));
+  const lon1 = fromMicroDegrees(readSignedInt32(bytes, o + 42));
   const flags = bytes[o + 46];
-  const latTrue = readSignedInt32(bytes, o + 47) * MICRO_DEGREES;
-  const lonV = wrapLongitude(readSignedInt32(bytes, o + 51) * MICRO_DEGREES);
-  const dx = readUint32(bytes, o + 55) * MILLIMETRES;
-  const dy = readUint32(bytes, o + 59) * MILLIMETRES;
+  const latTrue = fromMicroDegrees(readSignedInt32(bytes, o + 47));
+  const lonV = wrapLongitude(fromMicroDegrees(readSignedInt32(bytes, o + 51)));
+  const dx = fromMillimetres(readUint32(bytes, o + 55));
+  const dy = fromMillimetres(readUint32(bytes, o + 59));
   const centre = bytes[o + 63];
   const scan = readScanMode(bytes[o + 64], { ...where, byteOffset: o + 64 });
   if (centre & 0x40) throw new Grib2DecodeError(where, "bipolar projections (projection centre flag bit 2) are not supported");

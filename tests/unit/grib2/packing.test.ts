@@ -26,6 +26,7 @@ const CASES: [string, number, number][] = [
   ["ccsds-patchy-24bit-block32-rsi1.grib2", 42, 24],
   ["ccsds-patchy-7bit-block64-rsi2.grib2", 42, 7],
   ["ccsds-patchy-3bit-block8-rsi4.grib2", 42, 3],
+  ["ccsds-patchy-10bit-block16-rsi5.grib2", 42, 10],
   ["ccsds-lowentropy-block8-rsi16.grib2", 42, 8],
   ["ccsds-lowentropy-block16-rsi4.grib2", 42, 8],
   ["ccsds-flags6-8bit-lowentropy.grib2", 42, 8],
