@@ -7,6 +7,15 @@ export const paths = {
   audit: "/audit",
 } as const;
 
+/**
+ * The Soundings page showing the model column nearest a map point of one frame (the map viewer links here).
+ * Coordinates are rounded to 4 decimals (about 10 m), far finer than any model grid.
+ */
+export function soundingLinkForPoint(frameId: number, lat: number, lon: number): string {
+  const params = new URLSearchParams({ frame: String(frameId), lat: lat.toFixed(4), lon: lon.toFixed(4) });
+  return `${paths.soundings}?${params.toString()}`;
+}
+
 /** The sign-in URL that returns the user to `next` afterwards. */
 export function loginPathFor(next: string): string {
   const target = safeNextPath(next);
