@@ -1,6 +1,8 @@
 import { describe, expect, it } from "vitest";
 import { decodeNetcdf } from "../../../server/ingest/netcdf/index.ts";
 import { netcdfToGridRecords } from "../../../server/ingest/netcdf-grid-records.ts";
+import { decodeGridFile } from "../../../server/ingest/decode-file.ts";
+import { assembleFrames } from "../../../server/ingest/assemble-frames.ts";
 import { interpretCfDataset } from "../../../server/ingest/netcdf/cf-dataset.ts";
 import { memoryDataset, memoryVariable } from "./memory-dataset.ts";
 import { readFixture } from "./ncdump-listing.ts";
@@ -51,5 +53,35 @@ describe("NetCDF variables as format-neutral grid records", () => {
     );
     // Common practice (no source): a value in a unit the decoder cannot convert is never used as if it were SI.
     expect(netcdfToGridRecords(dataset)[0].parameter).toBeNull();
+  });
+});
+
+describe("decodeGridFile", () => {
+  it("routes NetCDF files through the NetCDF decoder", async () => {
+    const records = await decodeGridFile(readFixture("lambert-km-nc4.nc"), "netcdf");
+    // Source: lambert-km.cdl holds 4 single-level variables at one time.
+    expect(records).toHaveLength(4);
+    expect(records.map((r) => r.parameter)).toEqual(["u_wind", "v_wind", null, "specific_humidity"]);
+  });
+});
+
+describe("a complete NetCDF file assembles into a frame", () => {
+  it("every field lands where frame assembly expects it", async () => {
+    const { frames, ignored } = assembleFrames(await decodeGridFile(readFixture("frame-latlon-nc4.nc"), "netcdf"));
+    // Source: frame-latlon.cdl (run 12 UTC, valid 18 UTC; levels 1000/850/500 hPa; uniform values per level).
+    expect(frames).toHaveLength(1);
+    expect(ignored).toEqual([]);
+    const [frame] = frames;
+    expect(frame).toMatchObject({ model: "Bellwether fixture model", runTime: "2024-05-20T12:00:00.000Z", validTime: "2024-05-20T18:00:00.000Z", forecastHour: 6 });
+    expect(frame.levels).toEqual([100_000, 85_000, 50_000]);
+    expect(frame.grid.temperature[9 * 2]).toBe(262);
+    expect(frame.grid.humidity.kind).toBe("relativeHumidity");
+    // Derived in closed form: 60 % at 850 hPa handed over as the fraction 0.6.
+    expect(frame.grid.humidity.values[9]).toBeCloseTo(0.6, 6);
+    expect(frame.grid.surface.pressure[4]).toBe(98_500);
+    expect(frame.grid.surface.humidity).toMatchObject({ kind: "dewpoint" });
+    expect(frame.grid.surface.u[0]).toBe(4);
+    // Source: frame-latlon.cdl has no surface height, so frame assembly derives it from the isobaric heights.
+    expect(frame.surfaceHeightDerived).toBe(true);
   });
 });
