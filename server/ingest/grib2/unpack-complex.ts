@@ -14,7 +14,8 @@ import { fillConstant, linearScale } from "./packing-scale.ts";
  */
 export function unpackComplex(payload: Uint8Array, scale: PackingScale, complex: ComplexPacking, out: Float32Array): number {
   const n = scale.valueCount;
-  if (scale.bitsPerValue === 0 && complex.missingManagement === 0) {
+  // No groups at all can only mean a constant field; with groups, zero-bit references are read like any other.
+  if (complex.groupCount === 0) {
     fillConstant(scale, out);
     return 0;
   }
@@ -40,7 +41,6 @@ interface Groups {
 
 function readGroups(payload: Uint8Array, start: number, scale: PackingScale, complex: ComplexPacking, n: number): Groups {
   const ng = complex.groupCount;
-  if (ng === 0 && n > 0) throw new Grib2PayloadError(`${n} values are packed in zero groups`);
   if (ng > n && n > 0) throw new Grib2PayloadError(`${ng} groups for only ${n} values`);
   const reader = new BitReader(payload, start);
   const references = new Uint32Array(ng);

@@ -15,7 +15,13 @@ import { readFixture, readListing, readOriginal } from "./helpers/fixtures.ts";
  * from the test folder's own encoder, written from WMO-No. 306 templates 5.2/5.3 and 7.2/7.3. Two independent
  * readers must agree with the values that went in: ecCodes' grib_get_data and Bellwether's decoder.
  */
-const OWN_FIXTURES = ["own-spatial-order2.grib2", "own-spatial-order1.grib2", "own-complex-missing.grib2", "own-spatial-order2-missing.grib2"];
+const OWN_FIXTURES = [
+  "own-spatial-order2.grib2",
+  "own-spatial-order1.grib2",
+  "own-complex-missing.grib2",
+  "own-spatial-order2-missing.grib2",
+  "own-spatial-order2-constant.grib2",
+];
 
 /** Original values are in storage order; these fixtures scan north row first (mode 0), 12 x 9. */
 function storedToCanonical(values: Float32Array, nx: number, ny: number, k: number): number {
@@ -85,6 +91,7 @@ describe("round trips through the own encoder, in memory", () => {
     ["order 2, groups of one value", pattern, { order: 2, decimalScale: 1, groupLengths: [1], missingManagement: 0 }],
     ["order 1, negative values", negative, { order: 1, decimalScale: 3, groupLengths: [4, 10], missingManagement: 0 }],
     ["order 0, negative values", negative, { order: 0, decimalScale: 2, groupLengths: [3, 5, 9], missingManagement: 0 }],
+    ["order 0, a constant field", pattern.map(() => -12.25), { order: 0, decimalScale: 2, groupLengths: [7], missingManagement: 0 }],
     [
       "order 1, primary missing in a whole group",
       pattern.map((v, k) => (k >= 10 && k < 30 ? Number.NaN : v)),
