@@ -32,13 +32,24 @@ export function scanGrib2(bytes: Uint8Array): Grib2FieldInfo[] {
   return splitIntoFields(bytes).map((sections, index) => describeField(bytes, sections, index).info);
 }
 
+export interface DecodeOptions {
+  /**
+   * Unpacks only the fields this returns true for (after every field's metadata has been checked). A model file
+   * can hold hundreds of fields; unpacking only those needed keeps memory to what is used.
+   */
+  select?: (field: Grib2FieldInfo) => boolean;
+}
+
 /**
- * Decodes every field of a GRIB2 file. Values come back in Bellwether's canonical layout (index = j * nx + i,
- * i eastward, j northward, (0, 0) south-west) with NaN where a value is missing. Files using JPEG 2000 packing
- * need `await loadGrib2Codecs()` once beforehand. Throws Grib2DecodeError naming message, section and byte.
+ * Decodes the fields of a GRIB2 file (all of them unless `options.select` says otherwise). Values come back in
+ * Bellwether's canonical layout (index = j * nx + i, i eastward, j northward, (0, 0) south-west) with NaN where a
+ * value is missing. Files using JPEG 2000 packing need `await loadGrib2Codecs()` once beforehand.
+ * Throws Grib2DecodeError naming message, section and byte.
  */
-export function decodeGrib2(bytes: Uint8Array): Grib2Message[] {
-  return splitIntoFields(bytes).map((sections, index) => decodeField(bytes, describeField(bytes, sections, index)));
+export function decodeGrib2(bytes: Uint8Array, options: DecodeOptions = {}): Grib2Message[] {
+  const described = splitIntoFields(bytes).map((sections, index) => describeField(bytes, sections, index));
+  const wanted = options.select ? described.filter((field) => options.select!(field.info)) : described;
+  return wanted.map((field) => decodeField(bytes, field));
 }
 
 function describeField(bytes: Uint8Array, sections: FieldSections, index: number): DescribedField {

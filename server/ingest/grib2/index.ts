@@ -1,5 +1,5 @@
 /** GRIB2 decoder: public surface. Everything else in this folder is internal. */
-export { decodeGrib2, scanGrib2 } from "./decode.ts";
+export { decodeGrib2, scanGrib2, type DecodeOptions } from "./decode.ts";
 export { loadGrib2Codecs } from "./codecs.ts";
 export { decodeGrib2ForBenchmark } from "./bench-hook.ts";
 export { Grib2DecodeError } from "./errors.ts";

@@ -112,6 +112,19 @@ describe("statistically processed fields", () => {
   });
 });
 
+describe("decoding selected fields only", () => {
+  it("unpacks just the fields the filter keeps, with their file positions", () => {
+    const bytes = readFixture("multi-message.grib2");
+    const winds = decodeGrib2(bytes, { select: (f) => f.parameter.shortName === "u" || f.parameter.shortName === "v" });
+    expect(winds.map((f) => [f.index, f.parameter.shortName])).toEqual([
+      [1, "u"],
+      [2, "v"],
+    ]);
+    // Source: ecCodes 2.28 grib_get_data
+    expectMatchesListing(winds[1], readListing("multi-message.grib2")[2]);
+  });
+});
+
 describe("scanGrib2 lists metadata without unpacking", () => {
   it("gives the same metadata as decodeGrib2", () => {
     const bytes = readFixture("multi-message.grib2");
