@@ -3,6 +3,9 @@
  * show the units staff use. Features add their formatters here rather than converting inline.
  */
 
+import { toDisplayUnit, type FieldDefinition } from "@shared/fields.ts";
+import { ICE_POINT } from "@shared/meteo/constants.ts";
+
 /** Metres per second in one knot: 1852 m per hour (BIPM SI Brochure, 9th ed. 2019, Table 8, nautical mile). */
 const METERS_PER_SECOND_PER_KNOT = 1852 / 3600;
 
@@ -25,4 +28,26 @@ export function formatWindKnots(speed: number | null | undefined): string {
 /** A count with its noun, singular or plural ("1 entry", "2,310 entries"). */
 export function formatCount(count: number, singular: string, plural = `${singular}s`): string {
   return `${formatNumber(count)} ${count === 1 ? singular : plural}`;
+}
+
+/** A catalogue field's stored (SI) value in its display unit and rounding, without the unit ("2,450", "39", "—"). */
+export function formatFieldValue(field: FieldDefinition, value: number | null | undefined): string {
+  if (value === null || value === undefined || !Number.isFinite(value)) return "—";
+  if (field.kind === "bool") return value === 1 ? "yes" : "no";
+  if (field.kind === "category") return field.categories?.find((c) => c.code === value)?.label ?? String(value);
+  const shown = toDisplayUnit(field, value);
+  // A value that rounds to zero shows as "0", not "-0" (a CIN of −0.3 J/kg).
+  return formatNumber(Number(shown.toFixed(field.display.decimals)) === 0 ? 0 : shown, field.display.decimals);
+}
+
+/** Kelvin shown as degrees Celsius ("18.6"). */
+export function formatCelsius(temperature: number | null | undefined, fractionDigits = 1): string {
+  if (temperature === null || temperature === undefined || !Number.isFinite(temperature)) return "—";
+  return formatNumber(temperature - ICE_POINT, fractionDigits);
+}
+
+/** Pascals shown as hectopascals ("850"). */
+export function formatHectopascals(pressure: number | null | undefined, fractionDigits = 0): string {
+  if (pressure === null || pressure === undefined || !Number.isFinite(pressure)) return "—";
+  return formatNumber(pressure / 100, fractionDigits);
 }
