@@ -14,6 +14,7 @@ import type { Services } from "./services/container.ts";
 import { createGridsRouter } from "./routes/grids.router.ts";
 import { createEventsRouter } from "./routes/events.router.ts";
 import { createSoundingsRouter } from "./routes/soundings.router.ts";
+import { createZonesRouter } from "./routes/zones.router.ts";
 import { createHealthRouter } from "./routes/health.router.ts";
 import { createAuthRouter } from "./routes/auth.router.ts";
 import { createUsersRouter } from "./routes/users.router.ts";
@@ -83,6 +84,7 @@ export function createApp(deps: AppDeps): BellwetherApp {
   );
   app.use("/api/events", createEventsRouter(services.events, routes));
   app.use("/api/soundings", createSoundingsRouter(routes));
+  app.use("/api/zones", createZonesRouter(services.zones, routes));
   app.use("/api", apiNotFound);
 
   if (deps.clientDir && fs.existsSync(path.join(deps.clientDir, "index.html"))) {

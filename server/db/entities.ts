@@ -5,6 +5,8 @@ import { IngestJobEntity } from "../entities/ingest-job.entity.ts";
 import { ModelRunEntity } from "../entities/model-run.entity.ts";
 import { GridFrameEntity } from "../entities/grid-frame.entity.ts";
 import { FieldInfoEntity } from "../entities/field-info.entity.ts";
+import { ZoneEntity } from "../entities/zone.entity.ts";
+import { ZoneMaskEntity } from "../entities/zone-mask.entity.ts";
 
 /** Every entity the data source knows; add new ones here. */
-export const ENTITIES = [UserEntity, SessionEntity, AuditEntryEntity, IngestJobEntity, ModelRunEntity, GridFrameEntity, FieldInfoEntity];
+export const ENTITIES = [UserEntity, SessionEntity, AuditEntryEntity, IngestJobEntity, ModelRunEntity, GridFrameEntity, FieldInfoEntity, ZoneEntity, ZoneMaskEntity];

@@ -7,6 +7,7 @@ import { IngestService } from "../ingest/ingest.service.ts";
 import { GridFrameProcessor, type ColumnDiagnoser, type GridDecoder } from "../ingest/frame-processor.ts";
 import { GridQueryService } from "../grids/grid-query.service.ts";
 import { frameExtraDiagnosers } from "../ingest/frame-diagnostics.ts";
+import { ZoneService } from "./zone.service.ts";
 import { decodeGridFile } from "../ingest/decode-file.ts";
 import { inProcessColumnDiagnoser, poolColumnDiagnoser } from "../ingest/column-diagnoser.ts";
 import { ColumnDiagnosticsPool } from "../diagnostics/column-pool.ts";
@@ -21,6 +22,7 @@ export interface Services {
   users: UserService;
   ingest: IngestService;
   grids: GridQueryService;
+  zones: ZoneService;
   /** Releases worker threads and other resources. */
   close(): Promise<void>;
 }
@@ -53,6 +55,7 @@ export function createServices(config: AppConfig, dataSource: DataSource, logger
     users: new UserService(dataSource, config.BCRYPT_COST),
     ingest,
     grids: new GridQueryService(dataSource, config.dataDir),
+    zones: new ZoneService(dataSource),
     async close() {
       await ingest.stop();
       await pool?.destroy();

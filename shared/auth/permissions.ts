@@ -25,6 +25,8 @@ export const PERMISSIONS = {
   "catalogue.read": EVERYONE,
   "grids.read": EVERYONE,
   "grids.upload": ["lead", "forecaster", "admin"],
+  "zones.read": EVERYONE,
+  "zones.write": ["lead"],
 } as const satisfies Record<string, readonly Role[]>;
 
 export type Permission = keyof typeof PERMISSIONS;

@@ -3,6 +3,7 @@ import fs from "node:fs";
 import { ROLES, PERMISSIONS, type Role } from "../../shared/auth/permissions.ts";
 import { startTestServer, signIn, anonymous, ingestBytes, DEMO_USER_FOR_ROLE, type SignedInAgent, type TestServer } from "../helpers/test-server.ts";
 import { fakeGribBytes, syntheticRecords } from "../helpers/synthetic-grid.ts";
+import { SYSTEM_ACTOR } from "../../server/audit/audit-log.ts";
 import type { HttpMethod, RouteEntry } from "../../server/http/route-table.ts";
 
 /**
@@ -18,9 +19,12 @@ interface Example {
   attach?: () => [string, Buffer, string];
   /** A Server-Sent Events stream: only the status is read, then the connection is dropped. */
   stream?: boolean;
+  /** Creates what the call needs and returns the concrete path. */
+  prepare?: () => Promise<string>;
 }
 
 let counter = 0;
+const SQUARE = { type: "Polygon", coordinates: [[[-99, 35], [-98, 35], [-98, 36], [-99, 36], [-99, 35]]] };
 const SOUNDING = fs.readFileSync("tests/fixtures/soundings/demo-warm-sector.csv", "utf8");
 const EXAMPLES: Record<string, Example> = {
   "get /api/health/": { path: "/api/health" },
@@ -47,6 +51,19 @@ const EXAMPLES: Record<string, Example> = {
   "get /api/events/": { path: "/api/events", stream: true },
   "post /api/soundings/diagnose": { path: "/api/soundings/diagnose", body: () => ({ csv: SOUNDING }) },
   "post /api/soundings/report": { path: "/api/soundings/report", body: () => ({ csv: SOUNDING }) },
+  "get /api/zones/": { path: "/api/zones" },
+  "get /api/zones/:id": { path: "/api/zones/1" },
+  "post /api/zones/": { path: "/api/zones", body: () => ({ code: `M${++counter}`, name: "Matrix zone", geometry: SQUARE }) },
+  "post /api/zones/import": {
+    path: "/api/zones/import",
+    body: () => ({ type: "FeatureCollection", features: [{ type: "Feature", properties: { code: `I${++counter}`, name: "Imported" }, geometry: SQUARE }] }),
+  },
+  "patch /api/zones/:id": { path: "/api/zones/1", body: () => ({ name: `Renamed ${++counter}` }) },
+  "delete /api/zones/:id": {
+    path: "",
+    // Each cell deletes a zone of its own, so zone 1 stays for the other cells.
+    prepare: async () => `/api/zones/${(await server.services.zones.create(SYSTEM_ACTOR, { code: `D${++counter}`, name: "To delete", geometry: SQUARE as never })).id}`,
+  },
 };
 
 const keyOf = (r: RouteEntry) => `${r.method} ${r.path}`;
@@ -57,7 +74,8 @@ function allowedRoles(route: RouteEntry): readonly Role[] {
 }
 
 async function call(who: SignedInAgent, method: HttpMethod, example: Example) {
-  const req = who.agent[method](example.path).set("x-csrf-token", who.csrf);
+  const path = example.prepare ? await example.prepare() : example.path;
+  const req = who.agent[method](path).set("x-csrf-token", who.csrf);
   if (example.stream) {
     // Resolve on the first bytes of the stream (or the end of an error body), then hang up.
     return req.buffer(true).parse((res, done) => {
@@ -85,6 +103,7 @@ beforeAll(async () => {
   server = await startTestServer({}, { decode: (bytes) => syntheticRecords({ model: Buffer.from(bytes).toString("latin1").slice(8) }) });
   // One ingested frame (id 1) so the frame routes have something to answer with.
   await ingestBytes(server, fakeGribBytes("matrix-seed"), "seed.grib2");
+  await server.services.zones.create(SYSTEM_ACTOR, { code: "SEED", name: "Seed zone", geometry: SQUARE as never });
 });
 afterAll(async () => server.close());
 
