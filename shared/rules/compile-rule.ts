@@ -13,7 +13,7 @@ import type { FieldKey } from "../fields.ts";
 import type { CheckedRule, ComparisonOperator, ConditionNode, NumberNode } from "./rule-ast.ts";
 import { applyArithmetic, applyNumericFunction } from "./rule-functions.ts";
 import {
-  AllMask, AnyMask, ArithmeticValue, BLOCK_SIZE, CompareConstantMask, CompareMask, ConstantMask, ConstantValue,
+  ArithmeticValue, ChainMask, BLOCK_SIZE, CompareConstantMask, CompareMask, ConstantMask, ConstantValue,
   FieldSlot, FieldValue, FlagMask, FoldValue, ScratchPool, UnaryValue, type MaskStep, type ValueStep,
 } from "./rule-steps.ts";
 
@@ -108,7 +108,8 @@ class Lowering {
     if (steps.length === 1) return steps[0];
     const idx = pool.index(depth);
     const fallback = pool.mask(depth, 1);
-    return (op === "and") === wanted ? new AllMask(steps, idx, fallback) : new AnyMask(steps, idx, fallback);
+    // "Met" of an `and` (or "not met" of an `or`) needs every part; the other two need any part.
+    return new ChainMask(steps, (op === "and") === wanted ? 1 : 0, idx, fallback);
   }
 
   private compare(op: ComparisonOperator, left: NumberNode, right: NumberNode, depth: number): MaskStep {

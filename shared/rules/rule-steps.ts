@@ -189,78 +189,49 @@ export class CompareMask implements MaskStep {
 }
 
 /**
- * Met where every part is met. The first part (in learned order, see PartOrder) runs densely over the
- * block; the points it leaves standing are listed in `idx`, and each later part, with its arithmetic,
- * only examines those. A block with nothing left is finished at once.
+ * An `and` or `or` over several parts, tracking the points still "in play": for `and` (bit 1) the points
+ * met so far, for `or` (bit 0) the points not met so far. The first part (in learned order, see
+ * PartOrder) runs densely over the block; the points in play are listed in `idx`, and each later part,
+ * with its arithmetic, only examines those. A block with nothing left in play is finished at once.
  */
-export class AllMask implements MaskStep {
+export class ChainMask implements MaskStep {
   private readonly ranking: PartOrder;
   constructor(
     private readonly parts: readonly MaskStep[],
+    /** 1: met where all parts are met (and). 0: not met only where no part is met (or). */
+    private readonly bit: 0 | 1,
     private readonly idx: Uint16Array,
     private readonly fallback: Uint8Array,
   ) {
     this.ranking = new PartOrder(parts.length);
   }
+
   run(dst: Uint8Array, dstBase: number, start: number, len: number): number {
-    const { parts, idx, ranking } = this;
+    const { parts, bit, idx, ranking } = this;
     const order = ranking.order;
     ranking.startBlock();
-    let count = parts[order[0]].run(dst, dstBase, start, len);
-    ranking.note(order[0], len, count);
-    if (count === 0) return 0;
-    count = indicesOf(dst, dstBase, len, 1, idx);
-    for (let k = 1; k < parts.length && count > 0; k++) {
-      const examined = count;
-      count = parts[order[k]].filter(idx, count, start, len, 1);
-      ranking.note(order[k], examined, count);
+    const met = parts[order[0]].run(dst, dstBase, start, len);
+    let inPlay = bit === 1 ? met : len - met;
+    ranking.note(order[0], len, inPlay);
+    if (inPlay === 0) return met;
+    indicesOf(dst, dstBase, len, bit, idx);
+    for (let k = 1; k < parts.length && inPlay > 0; k++) {
+      const examined = inPlay;
+      inPlay = parts[order[k]].filter(idx, inPlay, start, len, bit);
+      ranking.note(order[k], examined, inPlay);
     }
-    writeIndexed(dst, dstBase, len, idx, count, 1);
-    return count;
+    writeIndexed(dst, dstBase, len, idx, inPlay, bit);
+    return bit === 1 ? inPlay : len - inPlay;
   }
+
   filter(idx: Uint16Array, count: number, start: number, len: number, keep: 0 | 1): number {
-    if (keep === 0) {
+    if (keep !== this.bit) {
       // The mixed case (e.g. "not met" of an `and` inside an `or`): evaluate densely, then pick.
       this.run(this.fallback, 0, start, len);
       return filterByMask(idx, count, this.fallback, keep);
     }
-    for (let k = 0; k < this.parts.length && count > 0; k++) count = this.parts[this.ranking.order[k]].filter(idx, count, start, len, 1);
-    return count;
-  }
-}
-
-/** Met where any part is met; `idx` tracks the points not met yet, and each later part only examines those. */
-export class AnyMask implements MaskStep {
-  private readonly ranking: PartOrder;
-  constructor(
-    private readonly parts: readonly MaskStep[],
-    private readonly idx: Uint16Array,
-    private readonly fallback: Uint8Array,
-  ) {
-    this.ranking = new PartOrder(parts.length);
-  }
-  run(dst: Uint8Array, dstBase: number, start: number, len: number): number {
-    const { parts, idx, ranking } = this;
-    const order = ranking.order;
-    ranking.startBlock();
-    const count = parts[order[0]].run(dst, dstBase, start, len);
-    ranking.note(order[0], len, len - count);
-    if (count === len) return len;
-    let rest = indicesOf(dst, dstBase, len, 0, idx);
-    for (let k = 1; k < parts.length && rest > 0; k++) {
-      const examined = rest;
-      rest = parts[order[k]].filter(idx, rest, start, len, 0);
-      ranking.note(order[k], examined, rest);
-    }
-    writeIndexed(dst, dstBase, len, idx, rest, 0);
-    return len - rest;
-  }
-  filter(idx: Uint16Array, count: number, start: number, len: number, keep: 0 | 1): number {
-    if (keep === 1) {
-      this.run(this.fallback, 0, start, len);
-      return filterByMask(idx, count, this.fallback, keep);
-    }
-    for (let k = 0; k < this.parts.length && count > 0; k++) count = this.parts[this.ranking.order[k]].filter(idx, count, start, len, 0);
+    const order = this.ranking.order;
+    for (let k = 0; k < this.parts.length && count > 0; k++) count = this.parts[order[k]].filter(idx, count, start, len, keep);
     return count;
   }
 }

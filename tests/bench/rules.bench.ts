@@ -10,6 +10,7 @@
 import { FIELDS, type FieldDefinition, type FieldKey } from "../../shared/fields.ts";
 import { compileRule } from "../../shared/rules/compile-rule.ts";
 import { parseRuleOrThrow } from "../../shared/rules/parse-rule.ts";
+import { seededRandom } from "../reference/helpers/seeded-random.ts";
 
 const SIDE = 1000;
 const POINTS = SIDE * SIDE;
@@ -38,6 +39,27 @@ export async function run(): Promise<void> {
   console.log(`the "not met" masks as well (needed for coverage): + ${describe(notMet)}`);
   console.log(`mean share of points met per rule: ${(share * 100).toFixed(1)} %`);
   console.log(met.wall < 1 ? "target (< 1 s) met" : `target (< 1 s) ${met.cpu < 1 ? "met in CPU time, not in wall time (busy machine?)" : "NOT met"}`);
+
+  // Worst case for the selection lists: values with no spatial order at all (white noise).
+  t = performance.now();
+  const noise = buildNoiseFrame(random);
+  const noisy = timeBest(() => rules.forEach((r, i) => r.evaluate((key: FieldKey) => noise.get(key), POINTS, masks[i])));
+  console.log(`worst case, white-noise fields (built in ${seconds(t)} s): ${describe(noisy)}`);
+}
+
+function buildNoiseFrame(r: () => number): Map<FieldKey, Float32Array> {
+  const frame = new Map<FieldKey, Float32Array>();
+  for (const field of FIELDS) {
+    const [lo, hi] = field.range;
+    const codes = field.categories?.map((c) => c.code) ?? [];
+    const data = new Float32Array(POINTS);
+    for (let i = 0; i < POINTS; i++) {
+      const unit = r();
+      data[i] = field.kind === "bool" ? +(unit > 0.6) : field.kind === "category" ? codes[Math.floor(unit * codes.length)] : lo + (hi - lo) * unit;
+    }
+    frame.set(field.key as FieldKey, data);
+  }
+  return frame;
 }
 
 interface Timing {
@@ -141,18 +163,6 @@ function countOnes(mask: Uint8Array): number {
 
 function pick<T>(r: () => number, options: readonly T[]): T {
   return options[Math.floor(r() * options.length)];
-}
-
-/** mulberry32: a small seeded generator, so every run of the benchmark sees the same frame and rules. */
-function seededRandom(seed: number): () => number {
-  let a = seed >>> 0;
-  return () => {
-    a = (a + 0x6d2b79f5) >>> 0;
-    let t = a;
-    t = Math.imul(t ^ (t >>> 15), t | 1);
-    t ^= t + Math.imul(t ^ (t >>> 7), t | 61);
-    return ((t ^ (t >>> 14)) >>> 0) / 4294967296;
-  };
 }
 
 function seconds(since: number): string {

@@ -4,20 +4,10 @@
  * zeros, negatives and NaN (missing data).
  */
 import type { FieldKey } from "../../../shared/fields.ts";
+import { seededRandom } from "../../reference/helpers/seeded-random.ts";
 
 export type Random = () => number;
-
-/** mulberry32: tiny, seeded, good enough to vary test inputs reproducibly. */
-export function seededRandom(seed: number): Random {
-  let a = seed >>> 0;
-  return () => {
-    a = (a + 0x6d2b79f5) >>> 0;
-    let t = a;
-    t = Math.imul(t ^ (t >>> 15), t | 1);
-    t ^= t + Math.imul(t ^ (t >>> 7), t | 61);
-    return ((t ^ (t >>> 14)) >>> 0) / 4294967296;
-  };
-}
+export { seededRandom };
 
 const NUMBER_FIELDS = ["mlcape", "shear_0_6km", "mlcin", "srh_0_1km", "lapse_700_500"] as const;
 const FLAG_FIELDS = ["eff_present", "jet_exit"] as const;
