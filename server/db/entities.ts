@@ -7,6 +7,26 @@ import { GridFrameEntity } from "../entities/grid-frame.entity.ts";
 import { FieldInfoEntity } from "../entities/field-info.entity.ts";
 import { ZoneEntity } from "../entities/zone.entity.ts";
 import { ZoneMaskEntity } from "../entities/zone-mask.entity.ts";
+import { RuleEntity } from "../entities/rule.entity.ts";
+import { RuleVersionEntity } from "../entities/rule-version.entity.ts";
+import { RuleEvaluationEntity } from "../entities/rule-evaluation.entity.ts";
+import { TriggerEntity } from "../entities/trigger.entity.ts";
+import { TriggerEventEntity } from "../entities/trigger-event.entity.ts";
 
 /** Every entity the data source knows; add new ones here. */
-export const ENTITIES = [UserEntity, SessionEntity, AuditEntryEntity, IngestJobEntity, ModelRunEntity, GridFrameEntity, FieldInfoEntity, ZoneEntity, ZoneMaskEntity];
+export const ENTITIES = [
+  UserEntity,
+  SessionEntity,
+  AuditEntryEntity,
+  IngestJobEntity,
+  ModelRunEntity,
+  GridFrameEntity,
+  FieldInfoEntity,
+  ZoneEntity,
+  ZoneMaskEntity,
+  RuleEntity,
+  RuleVersionEntity,
+  RuleEvaluationEntity,
+  TriggerEntity,
+  TriggerEventEntity,
+];

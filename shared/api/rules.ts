@@ -113,3 +113,40 @@ export function checkExpression(expression: string): ExpressionCheckDto {
     ? { ok: true, normalised: result.rule.normalised, fieldKeys: [...result.rule.fieldKeys] }
     : { ok: false, errors: result.errors.map((e) => ({ ...e })) };
 }
+
+export const ruleVersionDto = z.object({
+  id: z.number().int(),
+  version: z.number().int(),
+  definition: ruleDefinition,
+  createdBy: z.string().nullable(),
+  createdAt: z.string(),
+  changeNote: z.string(),
+});
+export type RuleVersionDto = z.infer<typeof ruleVersionDto>;
+
+export const ruleDto = z.object({
+  id: z.number().int(),
+  name: z.string(),
+  enabled: z.boolean(),
+  createdBy: z.string().nullable(),
+  createdAt: z.string(),
+  updatedAt: z.string(),
+  current: ruleVersionDto,
+  /** Zones the rule uses that cover no point of a stored grid (the rule can never fire there). */
+  emptyZoneIds: z.array(z.number().int()),
+});
+export type RuleDto = z.infer<typeof ruleDto>;
+
+export const previewInput = z.object({
+  expression: z.string().max(MAX_EXPRESSION_LENGTH * 2),
+  frameId: z.number().int().positive().optional(),
+  zoneIds: z.array(z.number().int().positive()).max(200).default([]),
+  spatialCondition: spatialConditionSchema.default({ kind: "any-point" }),
+});
+export type PreviewInput = z.infer<typeof previewInput>;
+
+export const backtestInput = z.object({
+  versionId: z.number().int().positive().optional(),
+  runs: z.number().int().min(1).max(50).default(3),
+});
+export type BacktestInput = z.infer<typeof backtestInput>;
