@@ -1,11 +1,8 @@
 import { EventEmitter } from "node:events";
+import type { ServerEvents } from "../../shared/api/server-events.ts";
 
-/** Everything the server announces to connected clients over Server-Sent Events. */
-export interface BellwetherEvents {
-  "ingest.progress": { jobId: number; state: string; progress: number; note: string | null };
-  "ingest.finished": { jobId: number; state: "ready" | "failed"; reason: string | null; frameIds: number[] };
-  "frame.ready": { frameId: number; runId: number; model: string; runTime: string; validTime: string };
-}
+/** Everything the server announces to connected clients over Server-Sent Events (schemas in shared/api). */
+export type BellwetherEvents = ServerEvents;
 
 export type EventName = keyof BellwetherEvents;
 

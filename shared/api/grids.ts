@@ -77,3 +77,32 @@ export const latLonQuery = z.object({
   lat: z.coerce.number().min(-90).max(90),
   lon: z.coerce.number().min(-180).max(360),
 });
+
+const geometryBase = { nx: z.number().int().positive(), ny: z.number().int().positive(), earthRadius: z.number().positive(), uvRelativeToGrid: z.boolean() };
+
+/** A frame's grid geometry as the API sends it (see shared/grid/geometry-types.ts for the meaning of each value). */
+export const gridGeometryDto = z.discriminatedUnion("kind", [
+  z.object({ kind: z.literal("latlon"), ...geometryBase, lat0: z.number(), lon0: z.number(), dlat: z.number().positive(), dlon: z.number().positive() }),
+  z.object({
+    kind: z.literal("lambert"),
+    ...geometryBase,
+    lat0: z.number(),
+    lon0: z.number(),
+    dx: z.number().positive(),
+    dy: z.number().positive(),
+    lonV: z.number(),
+    latin1: z.number(),
+    latin2: z.number(),
+  }),
+  z.object({
+    kind: z.literal("polar"),
+    ...geometryBase,
+    lat0: z.number(),
+    lon0: z.number(),
+    dx: z.number().positive(),
+    dy: z.number().positive(),
+    lonV: z.number(),
+    latTrue: z.number(),
+    southPole: z.boolean(),
+  }),
+]);
