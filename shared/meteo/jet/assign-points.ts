@@ -7,10 +7,12 @@
  *
  * The nearest vertex is found in two passes so the cost does not grow with the square of the axis
  * resolution: every K-th vertex stamps the points within reach (K chosen for ~25 km between stamping
- * vertices), then each stamped point checks the vertices within ±2K of its stamping vertex.
+ * vertices), then each stamped point walks along the axis from its stamping vertex while the distance
+ * falls (at most 2K vertices).
  */
 import type { HorizontalGrid } from "./horizontal-grid.ts";
 import type { JetAxis } from "./jet-types.ts";
+import { GridScratch } from "./grid-scratch.ts";
 
 export interface PointAssignment {
   /** Index of the owning axis, −1 for none. */
@@ -24,15 +26,25 @@ export interface PointAssignment {
 /** Stamping vertices are spaced about this fraction of the reach apart (and at least 2 grid lengths). */
 const STAMP_SPACING_FRACTION = 1 / 20;
 
-export function assignPointsToAxes(grid: HorizontalGrid, axes: readonly JetAxis[], maxDistance: number): PointAssignment {
+/**
+ * `along` and `across` are written into `out` (new arrays by default, since they become output fields); the
+ * owner array and the search arrays come from `scratch`.
+ */
+export function assignPointsToAxes(
+  grid: HorizontalGrid,
+  axes: readonly JetAxis[],
+  maxDistance: number,
+  scratch: GridScratch = new GridScratch(),
+  out: { along: Float32Array; across: Float32Array } = { along: new Float32Array(grid.nx * grid.ny), across: new Float32Array(grid.nx * grid.ny) },
+): PointAssignment {
   const n = grid.nx * grid.ny;
-  const owner = new Int32Array(n).fill(-1);
-  const along = new Float32Array(n).fill(Number.NaN);
-  const across = new Float32Array(n).fill(Number.NaN);
-  const bestDistance2 = new Float64Array(n).fill(Infinity);
-  const stamp = new Int32Array(n).fill(-1);
-  const stampDistance2 = new Float64Array(n);
-  const stampVertex = new Int32Array(n);
+  const owner = scratch.int32("assignOwner", n).fill(-1);
+  const along = out.along.fill(Number.NaN);
+  const across = out.across.fill(Number.NaN);
+  const bestDistance2 = scratch.float64("assignBestDistance2", n).fill(Infinity);
+  const stamp = scratch.int32("assignStamp", n).fill(-1);
+  const stampDistance2 = scratch.float64("assignStampDistance2", n);
+  const stampVertex = scratch.int32("assignStampVertex", n);
   const result = { owner, along, across };
   axes.forEach((axis, a) => {
     if (axis.count < 3) return;
@@ -117,24 +129,23 @@ function refineStamped(
     if (stamp[p] !== a) continue;
     const i = p % nx;
     const j = (p - i) / nx;
-    const from = Math.max(0, stampVertex[p] - window);
-    const to = Math.min(last, stampVertex[p] + window);
-    let nearest = -1;
-    let nearest2 = Infinity;
-    let nearestDx = 0;
-    let nearestDy = 0;
-    for (let k = from; k <= to; k++) {
-      const dx = (i - axis.i[k]) * 0.5 * (hx[p] + axis.scaleX[k]);
-      const dy = (j - axis.j[k]) * 0.5 * (hy[p] + axis.scaleY[k]);
-      const d2 = dx * dx + dy * dy;
-      if (d2 < nearest2) {
-        nearest2 = d2;
-        nearest = k;
-        nearestDx = dx;
-        nearestDy = dy;
-      }
+    // Walk along the axis from the stamping vertex while the distance keeps falling (at most `window` steps).
+    const hxP = hx[p];
+    const hyP = hy[p];
+    let nearest = stampVertex[p];
+    let nearest2 = vertexDistance2(axis, nearest, i, j, hxP, hyP);
+    const step = nearest < last && vertexDistance2(axis, nearest + 1, i, j, hxP, hyP) < nearest2 ? 1 : -1;
+    for (let walked = 0; walked < window; walked++) {
+      const next = nearest + step;
+      if (next < 0 || next > last) break;
+      const next2 = vertexDistance2(axis, next, i, j, hxP, hyP);
+      if (next2 >= nearest2) break;
+      nearest = next;
+      nearest2 = next2;
     }
-    if (nearest < 0 || nearest2 > maxDistance2 || nearest2 >= bestDistance2[p]) continue;
+    const nearestDx = (i - axis.i[nearest]) * 0.5 * (hxP + axis.scaleX[nearest]);
+    const nearestDy = (j - axis.j[nearest]) * 0.5 * (hyP + axis.scaleY[nearest]);
+    if (nearest2 > maxDistance2 || nearest2 >= bestDistance2[p]) continue;
     if ((nearest === 0 && !openStart) || (nearest === last && !openEnd)) continue;
     const tx = axis.tangentX[nearest];
     const ty = axis.tangentY[nearest];
@@ -143,4 +154,11 @@ function refineStamped(
     result.along[p] = axis.s[nearest] + nearestDx * tx + nearestDy * ty;
     result.across[p] = -nearestDx * ty + nearestDy * tx;
   }
+}
+
+/** Squared physical distance (m²) from grid point (i, j), with scale factors hxP, hyP, to axis vertex k. */
+function vertexDistance2(axis: JetAxis, k: number, i: number, j: number, hxP: number, hyP: number): number {
+  const dx = (i - axis.i[k]) * 0.5 * (hxP + axis.scaleX[k]);
+  const dy = (j - axis.j[k]) * 0.5 * (hyP + axis.scaleY[k]);
+  return dx * dx + dy * dy;
 }

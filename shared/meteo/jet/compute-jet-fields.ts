@@ -7,8 +7,9 @@ import { JET_FIELD_KEYS, fieldByKey, type JetFieldKey } from "../../fields.ts";
 import { horizontalGridFor, expectGridLength, type HorizontalGrid, type JetGeometry } from "./horizontal-grid.ts";
 import { resolveJetSettings, type JetSettings } from "./jet-settings.ts";
 import { windOnGridAxes, rotateToEarthInPlace } from "./wind-basis.ts";
-import { createSmoothingWorkspace, gaussianSmooth, type SmoothingWorkspace } from "./smoothing.ts";
-import { divergence, relativeVorticity, velocityGradient } from "./operators.ts";
+import { gaussianSmooth } from "./smoothing.ts";
+import { divergence, relativeVorticity, velocityGradient, type VelocityGradient } from "./operators.ts";
+import { GridScratch } from "./grid-scratch.ts";
 import { naturalCoordinates } from "./natural-coordinates.ts";
 import { ageostrophicWind, geostrophicWind } from "./geostrophic.ts";
 import { petterssenFrontogenesis, potentialTemperatureOnLevel } from "./frontogenesis.ts";
@@ -50,55 +51,69 @@ export interface JetFieldsResult {
   readonly qcRejected: Partial<Record<JetFieldKey, number>>;
 }
 
-export function computeJetFields(input: JetInput, overrides?: Partial<JetSettings>): JetFieldsResult {
+export interface JetComputeOptions {
+  /** Scratch arrays reused from call to call (keep one per worker and grid size); a fresh one by default. */
+  readonly scratch?: GridScratch;
+}
+
+export function computeJetFields(input: JetInput, overrides?: Partial<JetSettings>, options: JetComputeOptions = {}): JetFieldsResult {
   const settings = resolveJetSettings(overrides);
   validateInput(input);
   const grid = horizontalGridFor(input.geometry);
-  const workspace = createSmoothingWorkspace();
+  const scratch = options.scratch ?? new GridScratch();
   const n = grid.nx * grid.ny;
-  const fields = {} as Record<JetFieldKey, Float32Array>;
+  const fields = allocateJetFields(n);
   const warnings: string[] = [];
 
   // Smoothed wind in grid axes (rotated first, so smoothing and differencing share one basis).
-  const raw = windOnGridAxes(grid, input.u, input.v, input.geometry.uvRelativeToGrid);
-  const u = gaussianSmooth(grid, raw.u, settings.smoothingSigma, raw.u, workspace);
-  const v = gaussianSmooth(grid, raw.v, settings.smoothingSigma, raw.v, workspace);
-  const height = gaussianSmooth(grid, input.height, settings.smoothingSigma, new Float32Array(n), workspace);
+  const raw = windOnGridAxes(grid, input.u, input.v, input.geometry.uvRelativeToGrid, scratch.float32("u", n), scratch.float32("v", n));
+  const u = gaussianSmooth(grid, raw.u, settings.smoothingSigma, raw.u, scratch);
+  const v = gaussianSmooth(grid, raw.v, settings.smoothingSigma, raw.v, scratch);
+  const height = gaussianSmooth(grid, input.height, settings.smoothingSigma, scratch.float32("height", n), scratch);
 
-  const tensor = velocityGradient(grid, u, v);
-  const natural = naturalCoordinates(grid, u, v, undefined, tensor);
-  fields.jet_speed = natural.speed;
-  fields.jet_div = divergence(grid, u, v);
-  fields.jet_vort = relativeVorticity(grid, u, v);
-  fields.jet_along_accel = natural.alongAcceleration;
-  fields.jet_curv = cyclonicCurvature(grid, natural.curvature);
+  const tensor = velocityGradient(grid, u, v, scratchTensor(scratch, n));
+  const natural = naturalCoordinates(
+    grid,
+    u,
+    v,
+    {
+      speed: fields.jet_speed,
+      alongSpeedChange: scratch.float32("alongSpeedChange", n),
+      alongAcceleration: fields.jet_along_accel,
+      crossSpeedGradient: scratch.float32("crossSpeedGradient", n),
+      curvature: fields.jet_curv,
+    },
+    tensor,
+    scratch,
+  );
+  divergence(grid, u, v, fields.jet_div);
+  relativeVorticity(grid, u, v, fields.jet_vort);
+  cyclonicCurvature(grid, fields.jet_curv);
 
-  const geostrophic = geostrophicWind(grid, height);
-  const ageostrophic = ageostrophicWind(u, v, geostrophic.u, geostrophic.v);
-  rotateToEarthInPlace(grid, geostrophic.u, geostrophic.v);
-  rotateToEarthInPlace(grid, ageostrophic.u, ageostrophic.v);
-  fields.jet_ug = geostrophic.u;
-  fields.jet_vg = geostrophic.v;
-  fields.jet_uag = ageostrophic.u;
-  fields.jet_vag = ageostrophic.v;
+  geostrophicWind(grid, height, fields.jet_ug, fields.jet_vg);
+  ageostrophicWind(u, v, fields.jet_ug, fields.jet_vg, fields.jet_uag, fields.jet_vag);
+  rotateToEarthInPlace(grid, fields.jet_ug, fields.jet_vg);
+  rotateToEarthInPlace(grid, fields.jet_uag, fields.jet_vag);
 
-  const labelling = labelJetStreaks(grid, { u, v, speed: natural.speed, divergence: fields.jet_div }, settings);
-  const labels = labelling.labels;
-  fields.jet_quadrant = labels.quadrant;
-  fields.jet_left_exit = labels.leftExit;
-  fields.jet_right_entrance = labels.rightEntrance;
-  fields.jet_exit = labels.exit;
-  fields.jet_entrance = labels.entrance;
-  fields.jet_curv_class = labels.curvatureClass;
-  fields.jet_curv_strong = labels.curvatureStrong;
-  fields.jet_div_favoured = labels.divergenceFavoured;
-  fields.jet_div_ambiguous = labels.divergenceAmbiguous;
-  fields.jet_ascent_support = labels.ascentSupport;
-  fields.jet_along_dist = labelling.assignment.along;
-  fields.jet_axis_dist = labelling.assignment.across;
-  fields.jet_core_speed = labels.coreSpeed;
+  const labelling = labelJetStreaks(grid, { u, v, speed: fields.jet_speed, divergence: fields.jet_div }, settings, scratch, {
+    along: fields.jet_along_dist,
+    across: fields.jet_axis_dist,
+    labels: {
+      quadrant: fields.jet_quadrant,
+      leftExit: fields.jet_left_exit,
+      rightEntrance: fields.jet_right_entrance,
+      exit: fields.jet_exit,
+      entrance: fields.jet_entrance,
+      curvatureClass: fields.jet_curv_class,
+      curvatureStrong: fields.jet_curv_strong,
+      divergenceFavoured: fields.jet_div_favoured,
+      divergenceAmbiguous: fields.jet_div_ambiguous,
+      ascentSupport: fields.jet_ascent_support,
+      coreSpeed: fields.jet_core_speed,
+    },
+  });
 
-  const check = compareWithLocalQuadrants(labels.quadrant, natural.speed, natural.alongSpeedChange, natural.crossSpeedGradient, settings.axisSpeed);
+  const check = compareWithLocalQuadrants(fields.jet_quadrant, fields.jet_speed, natural.alongSpeedChange, natural.crossSpeedGradient, settings.axisSpeed);
   if (check.disagreementFraction > settings.fallbackDisagreementLimit) {
     warnings.push(
       `Jet quadrants: the local speed-gradient check disagrees with the axis labels on ${(100 * check.disagreementFraction).toFixed(0)} % ` +
@@ -106,8 +121,8 @@ export function computeJetFields(input: JetInput, overrides?: Partial<JetSetting
     );
   }
 
-  fields.fgen_850 = lowerLevelFrontogenesis(grid, input, input.p850, 85_000, settings, workspace);
-  fields.fgen_700 = lowerLevelFrontogenesis(grid, input, input.p700, 70_000, settings, workspace);
+  lowerLevelFrontogenesis(grid, input, input.p850, 85_000, settings, scratch, fields.fgen_850);
+  lowerLevelFrontogenesis(grid, input, input.p700, 70_000, settings, scratch, fields.fgen_700);
 
   const qcRejected = applyQualityRanges(fields);
   return {
@@ -118,6 +133,17 @@ export function computeJetFields(input: JetInput, overrides?: Partial<JetSetting
     fallbackDisagreement: check.disagreementFraction,
     qcRejected,
   };
+}
+
+/** One new array per catalogue key: these are handed to the caller. */
+function allocateJetFields(pointCount: number): Record<JetFieldKey, Float32Array> {
+  const fields = {} as Record<JetFieldKey, Float32Array>;
+  for (const key of JET_FIELD_KEYS) fields[key] = new Float32Array(pointCount);
+  return fields;
+}
+
+function scratchTensor(scratch: GridScratch, n: number): VelocityGradient {
+  return { ux: scratch.float32("ux", n), uy: scratch.float32("uy", n), vx: scratch.float32("vx", n), vy: scratch.float32("vy", n) };
 }
 
 function validateInput(input: JetInput): void {
@@ -133,30 +159,34 @@ function validateInput(input: JetInput): void {
   }
 }
 
-/** K_s · sign(f): positive where the flow curves cyclonically; NaN where f = 0. */
-function cyclonicCurvature(grid: HorizontalGrid, curvature: Float32Array): Float32Array {
+/** K_s · sign(f), in place: positive where the flow curves cyclonically; NaN where f = 0. */
+function cyclonicCurvature(grid: HorizontalGrid, curvature: Float32Array): void {
   const f = grid.coriolis;
   for (let k = 0; k < curvature.length; k++) curvature[k] = f[k] > 0 ? curvature[k] : f[k] < 0 ? -curvature[k] : Number.NaN;
-  return curvature;
 }
 
-/** Frontogenesis of the smoothed wind acting on smoothed θ at one lower level; NaN when the level is absent. */
+/** Frontogenesis of the smoothed wind acting on smoothed θ at one lower level into `out`; NaN when the level is absent. */
 function lowerLevelFrontogenesis(
   grid: HorizontalGrid,
   input: JetInput,
   level: ThermalWindLevel | undefined,
   pressure: number,
   settings: JetSettings,
-  workspace: SmoothingWorkspace,
-): Float32Array {
+  scratch: GridScratch,
+  out: Float32Array,
+): void {
+  if (!level) {
+    out.fill(Number.NaN);
+    return;
+  }
   const n = grid.nx * grid.ny;
-  if (!level) return new Float32Array(n).fill(Number.NaN);
-  const wind = windOnGridAxes(grid, level.u, level.v, input.geometry.uvRelativeToGrid);
-  const u = gaussianSmooth(grid, wind.u, settings.smoothingSigma, wind.u, workspace);
-  const v = gaussianSmooth(grid, wind.v, settings.smoothingSigma, wind.v, workspace);
-  const theta = potentialTemperatureOnLevel(level.temperature, pressure);
-  gaussianSmooth(grid, theta, settings.smoothingSigma, theta, workspace);
-  return petterssenFrontogenesis(grid, theta, u, v);
+  const wind = windOnGridAxes(grid, level.u, level.v, input.geometry.uvRelativeToGrid, scratch.float32("lowerU", n), scratch.float32("lowerV", n));
+  const u = gaussianSmooth(grid, wind.u, settings.smoothingSigma, wind.u, scratch);
+  const v = gaussianSmooth(grid, wind.v, settings.smoothingSigma, wind.v, scratch);
+  const theta = potentialTemperatureOnLevel(level.temperature, pressure, scratch.float32("theta", n));
+  gaussianSmooth(grid, theta, settings.smoothingSigma, theta, scratch);
+  // The jet-level tensor is finished with by now, so its scratch arrays are reused.
+  petterssenFrontogenesis(grid, theta, u, v, out, velocityGradient(grid, u, v, scratchTensor(scratch, n)), scratch);
 }
 
 /** Catalogue QC: numeric values outside a field's range become NaN; returns how many per field. */

@@ -9,15 +9,16 @@
 import type { HorizontalGrid } from "./horizontal-grid.ts";
 import type { JetSettings } from "./jet-settings.ts";
 import type { JetCore } from "./jet-types.ts";
+import { GridScratch } from "./grid-scratch.ts";
 
 type CoreSettings = Pick<JetSettings, "coreSpeed" | "coreSeparation" | "coreProminence" | "minCoreCells">;
 
-export function findJetCores(grid: HorizontalGrid, speed: Float32Array, settings: CoreSettings): JetCore[] {
+export function findJetCores(grid: HorizontalGrid, speed: Float32Array, settings: CoreSettings, scratch: GridScratch = new GridScratch()): JetCore[] {
   const { nx, ny } = grid;
   const cells = fastCellsFastestFirst(speed, settings.coreSpeed);
-  const parent = new Int32Array(nx * ny).fill(-1);
+  const parent = scratch.int32("coreParent", nx * ny).fill(-1);
   // For a region root: its highest cell (the region's peak).
-  const peak = new Int32Array(nx * ny).fill(-1);
+  const peak = scratch.int32("corePeak", nx * ny);
   const survivors: number[] = [];
   const roots = new Int32Array(8);
 
@@ -60,11 +61,13 @@ export function findJetCores(grid: HorizontalGrid, speed: Float32Array, settings
     }
   }
 
-  const size = new Int32Array(nx * ny);
-  for (let c = 0; c < cells.length; c++) size[findRoot(parent, cells[c])]++;
   const candidates: number[] = [];
   for (let c = 0; c < cells.length; c++) if (parent[cells[c]] === cells[c]) candidates.push(peak[cells[c]]);
   for (const p of survivors) candidates.push(p);
+  // Region sizes, indexed by the root cell (only fast cells are ever roots); the peak array is free now.
+  const size = peak;
+  for (let c = 0; c < cells.length; c++) size[cells[c]] = 0;
+  for (let c = 0; c < cells.length; c++) size[findRoot(parent, cells[c])]++;
 
   const kept: number[] = [];
   candidates.sort((a, b) => speed[b] - speed[a] || a - b);

@@ -4,6 +4,7 @@
 import { POISSON_EXPONENT, REFERENCE_PRESSURE } from "../constants.ts";
 import type { HorizontalGrid } from "./horizontal-grid.ts";
 import { allocateVelocityGradient, gradient, velocityGradient, type VelocityGradient } from "./operators.ts";
+import { GridScratch } from "./grid-scratch.ts";
 
 /** K m⁻¹ s⁻¹ → K (100 km)⁻¹ (3 h)⁻¹: 10⁵ m × 10 800 s. */
 export const FRONTOGENESIS_DISPLAY_FACTOR = 1e5 * 3 * 3600;
@@ -36,15 +37,16 @@ export function petterssenFrontogenesis(
   v: Float32Array,
   out: Float32Array = new Float32Array(grid.nx * grid.ny),
   tensor: VelocityGradient = velocityGradient(grid, u, v, allocateVelocityGradient(grid.nx * grid.ny)),
+  scratch: GridScratch = new GridScratch(),
 ): Float32Array {
-  const thetaGradient = gradient(grid, theta);
+  const thetaGradient = gradient(grid, theta, scratch.float32("gradientX", theta.length), scratch.float32("gradientY", theta.length));
   const tx = thetaGradient.x;
   const ty = thetaGradient.y;
   const { ux, uy, vx, vy } = tensor;
   for (let k = 0; k < out.length; k++) {
     const gx = tx[k];
     const gy = ty[k];
-    const magnitude = Math.hypot(gx, gy);
+    const magnitude = Math.sqrt(gx * gx + gy * gy);
     if (!(magnitude >= FRONTOGENESIS_MIN_GRADIENT)) {
       out[k] = magnitude === magnitude && ux[k] === ux[k] ? 0 : Number.NaN;
       continue;

@@ -12,6 +12,7 @@ import { splitSharedAxes } from "./axis-split.ts";
 import { axisTurningAngle, classifyCurvature, type CurvatureVerdict } from "./curvature.ts";
 import { assignPointsToAxes, type PointAssignment } from "./assign-points.ts";
 import { labelPoints, type LabelFields, type StreakSummary } from "./labels.ts";
+import { GridScratch } from "./grid-scratch.ts";
 
 export interface StreakInputs {
   /** Smoothed wind in grid axes, its speed and divergence. */
@@ -28,8 +29,17 @@ export interface StreakLabelling {
   readonly axes: readonly JetAxis[];
 }
 
-export function labelJetStreaks(grid: HorizontalGrid, inputs: StreakInputs, settings: JetSettings): StreakLabelling {
-  const cores = findJetCores(grid, inputs.speed, settings);
+/**
+ * `along`/`across` distances and the label fields are new arrays (or `out`); working arrays come from `scratch`.
+ */
+export function labelJetStreaks(
+  grid: HorizontalGrid,
+  inputs: StreakInputs,
+  settings: JetSettings,
+  scratch: GridScratch = new GridScratch(),
+  out?: { along: Float32Array; across: Float32Array; labels: LabelFields },
+): StreakLabelling {
+  const cores = findJetCores(grid, inputs.speed, settings, scratch);
   const traced = cores.map((core) => traceJetAxis(grid, inputs, core, settings));
   const axes = splitSharedAxes(grid, traced, cores, inputs.speed, settings.axisSearchDistance);
   const verdicts = axes.map((axis, index) =>
@@ -41,8 +51,8 @@ export function labelJetStreaks(grid: HorizontalGrid, inputs: StreakInputs, sett
     northern: coriolisSignAt(grid, core) >= 0,
     coreSpeed: core.speed,
   }));
-  const assignment = assignPointsToAxes(grid, axes, settings.axisMaxDistance);
-  const labels = labelPoints(assignment.owner, assignment.along, assignment.across, summaries, inputs.divergence, settings);
+  const assignment = assignPointsToAxes(grid, axes, settings.axisMaxDistance, scratch, out);
+  const labels = labelPoints(assignment.owner, assignment.along, assignment.across, summaries, inputs.divergence, settings, out?.labels);
   const labelled = new Int32Array(cores.length);
   for (let p = 0; p < assignment.owner.length; p++) if (assignment.owner[p] >= 0) labelled[assignment.owner[p]]++;
   const streaks = cores.map((core, index) => describeStreak(grid, index, core, axes[index], verdicts[index], summaries[index].northern, labelled[index]));

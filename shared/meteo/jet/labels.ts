@@ -109,20 +109,21 @@ export function labelPoints(
   settings: { coreHalfLength: number; ascentDivergence: number },
   out: LabelFields = allocateLabelFields(owner.length),
 ): LabelFields {
+  // Most points belong to no streak: bulk-fill their values, then visit only the owned points.
+  for (const zeroed of [out.quadrant, out.leftExit, out.rightEntrance, out.exit, out.entrance, out.curvatureStrong, out.divergenceFavoured, out.divergenceAmbiguous, out.ascentSupport]) {
+    zeroed.fill(0);
+  }
+  out.curvatureClass.fill(Number.NaN);
+  out.coreSpeed.fill(Number.NaN);
   for (let p = 0; p < owner.length; p++) {
-    const streak = owner[p] >= 0 ? streaks[owner[p]] : undefined;
-    const quadrant = streak ? quadrantOf(along[p], across[p], settings.coreHalfLength) : QUADRANT.none;
+    if (owner[p] < 0) continue;
+    const streak = streaks[owner[p]];
+    const quadrant = quadrantOf(along[p], across[p], settings.coreHalfLength);
     out.quadrant[p] = quadrant;
     out.leftExit[p] = quadrant === QUADRANT.leftExit ? 1 : 0;
     out.rightEntrance[p] = quadrant === QUADRANT.rightEntrance ? 1 : 0;
     out.exit[p] = quadrant === QUADRANT.leftExit || quadrant === QUADRANT.rightExit ? 1 : 0;
     out.entrance[p] = quadrant === QUADRANT.leftEntrance || quadrant === QUADRANT.rightEntrance ? 1 : 0;
-    if (!streak) {
-      out.curvatureClass[p] = Number.NaN;
-      out.coreSpeed[p] = Number.NaN;
-      out.curvatureStrong[p] = out.divergenceFavoured[p] = out.divergenceAmbiguous[p] = out.ascentSupport[p] = 0;
-      continue;
-    }
     const verdict = divergenceVerdict(quadrant, along[p], streak.curvatureClass, streak.northern);
     const favoured = verdict === DIVERGENCE_VERDICT.favoured;
     out.curvatureClass[p] = streak.curvatureClass;

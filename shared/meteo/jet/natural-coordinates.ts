@@ -4,6 +4,7 @@
  */
 import type { HorizontalGrid } from "./horizontal-grid.ts";
 import { allocateVelocityGradient, gradient, velocityGradient, type VelocityGradient } from "./operators.ts";
+import { GridScratch } from "./grid-scratch.ts";
 
 /** Below this speed (m s⁻¹) the flow has no usable direction: curvature and along/cross derivatives are NaN. */
 export const CALM_SPEED = 0.1;
@@ -49,10 +50,12 @@ export function naturalCoordinates(
   v: Float32Array,
   out: NaturalCoordinateFields = allocateNaturalCoordinateFields(grid.nx * grid.ny),
   tensor: VelocityGradient = velocityGradient(grid, u, v, allocateVelocityGradient(grid.nx * grid.ny)),
+  scratch: GridScratch = new GridScratch(),
 ): NaturalCoordinateFields {
   const { speed, alongSpeedChange, alongAcceleration, crossSpeedGradient, curvature } = out;
   windSpeed(u, v, speed);
-  const speedGradient = gradient(grid, speed);
+  const n = speed.length;
+  const speedGradient = gradient(grid, speed, scratch.float32("gradientX", n), scratch.float32("gradientY", n));
   const sx = speedGradient.x;
   const sy = speedGradient.y;
   const { ux, uy, vx, vy } = tensor;

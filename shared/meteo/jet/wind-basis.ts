@@ -7,7 +7,7 @@
 import type { HorizontalGrid } from "./horizontal-grid.ts";
 
 /**
- * Copies (u, v) into grid-axis components. `relativeToGrid` says which basis the input is in
+ * Writes (u, v) as grid-axis components into new arrays (or `outU`, `outV`). `relativeToGrid` says which basis the input is in
  * (the geometry's `uvRelativeToGrid`); latitude–longitude and f-plane grids need no rotation.
  */
 export function windOnGridAxes(
@@ -15,12 +15,16 @@ export function windOnGridAxes(
   u: Float32Array,
   v: Float32Array,
   relativeToGrid: boolean,
+  outU: Float32Array = new Float32Array(u.length),
+  outV: Float32Array = new Float32Array(v.length),
 ): { u: Float32Array; v: Float32Array } {
-  const outU = new Float32Array(u);
-  const outV = new Float32Array(v);
   const c = grid.rotationCos;
   const s = grid.rotationSin;
-  if (relativeToGrid || !c || !s) return { u: outU, v: outV };
+  if (relativeToGrid || !c || !s) {
+    outU.set(u);
+    outV.set(v);
+    return { u: outU, v: outV };
+  }
   for (let k = 0; k < outU.length; k++) {
     const ue = u[k];
     const ve = v[k];
