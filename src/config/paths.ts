@@ -3,6 +3,7 @@ export const paths = {
   overview: "/",
   login: "/login",
   soundings: "/soundings",
+  grids: "/grids",
   accounts: "/admin/accounts",
   audit: "/audit",
 } as const;
@@ -14,6 +15,12 @@ export const paths = {
 export function soundingLinkForPoint(frameId: number, lat: number, lon: number): string {
   const params = new URLSearchParams({ frame: String(frameId), lat: lat.toFixed(4), lon: lon.toFixed(4) });
   return `${paths.soundings}?${params.toString()}`;
+}
+
+/** The map viewer of one stored frame; `search` keeps the viewer's own settings ("?field=mlcape"). */
+export function gridFramePath(frameId: number, search = ""): string {
+  const query = search.startsWith("?") ? search.slice(1) : search;
+  return `${paths.grids}/frames/${frameId}${query ? `?${query}` : ""}`;
 }
 
 /** The sign-in URL that returns the user to `next` afterwards. */
