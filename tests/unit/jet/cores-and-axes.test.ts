@@ -23,6 +23,8 @@ describe("jet cores", () => {
   // A broad fast plateau (52 m/s) with two maxima 1600 km apart.
   const twoPeaks = (second: number) => field(grid, (x, y) => 52 * bump(0, y, 0, 1e9, 400e3) + 10 * bump(x, y, -800e3, 300e3, 300e3) + second * bump(x, y, 800e3, 300e3, 300e3));
 
+  // Derived in closed form for every expectation below: peaks of 52 + 10 and 52 + 8 (or + 3) m/s at x = ∓800 km,
+  // joined along y = 0 by the 52 m/s plateau (the saddle), so the lower peak stands 8 (or 3) m/s above it.
   it("keeps two maxima of one fast region apart when the lower stands ≥ 5 m/s above the saddle", () => {
     const cores = findJetCores(metric, twoPeaks(8), settings);
     expect(cores).toHaveLength(2);
@@ -35,6 +37,7 @@ describe("jet cores", () => {
     expect(findJetCores(metric, twoPeaks(3), settings)).toHaveLength(1);
   });
 
+  // Derived in closed form: maxima 400 km apart, inside the 600 km separation but outside 300 km.
   it("merges maxima closer than the core separation", () => {
     const close = field(grid, (x, y) => 40 + 20 * bump(x, y, -200e3, 150e3, 300e3) + 18 * bump(x, y, 200e3, 150e3, 300e3));
     expect(findJetCores(metric, close, settings)).toHaveLength(1);
@@ -102,6 +105,7 @@ describe("two parallel jets", () => {
   const u = field(grid, (x, y) => 20 + 40 * Math.exp(-((x / 1e6) ** 2)) * (Math.exp(-(((y - 500e3) / 200e3) ** 2)) + Math.exp(-(((y + 500e3) / 200e3) ** 2))));
   const result = computeJetFields({ geometry: grid.geometry, u, v: new Float32Array(u.length), height: new Float32Array(u.length) });
 
+  // Derived in closed form: axes along y = ±500 km; the probes lie 100 km inside each.
   it("gives each point to the nearer axis", () => {
     expect(result.streaks).toHaveLength(2);
     // 100 km north of the southern jet's axis: left of the southern jet, not right of the northern one.
