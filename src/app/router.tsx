@@ -65,6 +65,14 @@ export function createAppRouter(queryClient: QueryClient) {
           children: [
             { index: true, element: <OverviewRoute /> },
             {
+              path: paths.grids,
+              element: <RequirePermission area="grids" />,
+              children: [
+                { index: true, lazy: () => import("./routes/grids.tsx") },
+                { path: "frames/:frameId", lazy: () => import("./routes/grid-frame.tsx") },
+              ],
+            },
+            {
               path: paths.soundings,
               element: <RequirePermission area="soundings" />,
               children: [{ index: true, lazy: () => import("./routes/soundings.tsx") }],

@@ -17,6 +17,7 @@ export interface NavItem {
  */
 export const NAV_ITEMS = [
   { id: "overview", path: paths.overview, label: "Overview", permission: "session.read", shortcut: "o" },
+  { id: "grids", path: paths.grids, label: "Grids", permission: "grids.read", shortcut: "m" },
   { id: "soundings", path: paths.soundings, label: "Soundings", permission: "soundings.diagnose", shortcut: "s" },
   { id: "accounts", path: paths.accounts, label: "Accounts", permission: "users.read", shortcut: "a" },
   { id: "audit", path: paths.audit, label: "Audit trail", permission: "audit.read", shortcut: "u" },

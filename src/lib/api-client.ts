@@ -28,7 +28,7 @@ type QueryValue = string | number | boolean | null | undefined;
 
 export interface RequestOptions<T> {
   method?: Method;
-  /** Sent as JSON. */
+  /** Sent as JSON, except FormData, which goes as multipart (file uploads). */
   body?: unknown;
   /** Appended as a query string; null, undefined and "" are left out. */
   query?: Record<string, QueryValue>;
@@ -130,15 +130,17 @@ export function createApiClient(options: ApiClientOptions = {}) {
     const method = opts.method ?? "GET";
     const url = buildUrl(baseUrl, path, opts.query);
 
+    const multipart = typeof FormData !== "undefined" && opts.body instanceof FormData;
     async function attempt(): Promise<Response> {
       const headers: Record<string, string> = { accept: "application/json" };
-      if (opts.body !== undefined) headers["content-type"] = "application/json";
+      // The browser writes the multipart content type itself, boundary included.
+      if (opts.body !== undefined && !multipart) headers["content-type"] = "application/json";
       if (UNSAFE_METHODS.has(method)) headers["x-csrf-token"] = await csrf();
       return send(url, {
         method,
         headers,
         credentials: "same-origin",
-        body: opts.body === undefined ? undefined : JSON.stringify(opts.body),
+        body: opts.body === undefined ? undefined : multipart ? (opts.body as FormData) : JSON.stringify(opts.body),
         signal: opts.signal,
       });
     }
@@ -169,8 +171,21 @@ export function createApiClient(options: ApiClientOptions = {}) {
     return parsed.data;
   }
 
+  /** A GET whose reply is binary (grid fields): the bytes and the reply's headers. Failures are ApiErrors as usual. */
+  async function getBytes(path: string, opts: { query?: Record<string, QueryValue>; signal?: AbortSignal } = {}): Promise<BinaryReply> {
+    const response = await send(buildUrl(baseUrl, path, opts.query), {
+      method: "GET",
+      headers: { accept: "application/octet-stream" },
+      credentials: "same-origin",
+      signal: opts.signal,
+    });
+    if (!response.ok) throw errorFromResponse(response.status, response.statusText, await readJson(response));
+    return { bytes: await response.arrayBuffer(), headers: response.headers };
+  }
+
   return {
     request,
+    getBytes,
     get: <T>(path: string, opts: Omit<RequestOptions<T>, "method" | "body"> = {}) => request<T>(path, { ...opts, method: "GET" }),
     post: <T>(path: string, body?: unknown, opts: Omit<RequestOptions<T>, "method" | "body"> = {}) =>
       request<T>(path, { ...opts, method: "POST", body }),
@@ -184,6 +199,11 @@ export function createApiClient(options: ApiClientOptions = {}) {
       csrfToken = null;
     },
   };
+}
+
+export interface BinaryReply {
+  bytes: ArrayBuffer;
+  headers: Headers;
 }
 
 export type ApiClient = ReturnType<typeof createApiClient>;

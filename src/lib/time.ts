@@ -22,6 +22,14 @@ export function formatUtcTime(value: TimeInput): string {
   return `${pad2(d.getUTCHours())}:${pad2(d.getUTCMinutes())}Z`;
 }
 
+/** A model cycle as staff say it: "2025-05-02 12Z", with minutes only when the run is off the hour ("12:30Z"). */
+export function formatUtcCycle(value: TimeInput): string {
+  const d = toDate(value);
+  if (!isValid(d)) return "—";
+  const minutes = d.getUTCMinutes() === 0 ? "" : `:${pad2(d.getUTCMinutes())}`;
+  return `${d.getUTCFullYear()}-${pad2(d.getUTCMonth() + 1)}-${pad2(d.getUTCDate())} ${pad2(d.getUTCHours())}${minutes}Z`;
+}
+
 /** "14:32:05Z", for the header clock. */
 export function formatUtcClock(value: TimeInput): string {
   const d = toDate(value);
