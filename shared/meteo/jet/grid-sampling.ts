@@ -1,6 +1,6 @@
 /**
- * Values between grid points and short physical distances on a grid, for the axis tracer and the
- * point assignment. Positions are fractional indices (i, j); the local frame is the grid's own axes.
+ * Values between grid points, for the axis tracer and the curvature measure. Positions are fractional
+ * indices (i, j).
  */
 import type { HorizontalGrid } from "./horizontal-grid.ts";
 
@@ -22,19 +22,6 @@ export function sampleBilinear(grid: HorizontalGrid, field: ArrayLike<number>, i
   const south = field[k] + fi * (field[k + 1] - field[k]);
   const north = field[k + nx] + fi * (field[k + nx + 1] - field[k + nx]);
   return south + fj * (north - south);
-}
-
-/**
- * Physical displacement (m) from (i0, j0) to (i1, j1) along the local grid axes, using the mean of the two
- * ends' scale factors: exact for a uniform grid and within the change of map factor across the offset
- * otherwise (a few per cent over 500 km). `scale0X/Y` are hx, hy at the first point.
- */
-export function displacementX(i0: number, i1: number, scale0X: number, scale1X: number): number {
-  return (i1 - i0) * 0.5 * (scale0X + scale1X);
-}
-
-export function displacementY(j0: number, j1: number, scale0Y: number, scale1Y: number): number {
-  return (j1 - j0) * 0.5 * (scale0Y + scale1Y);
 }
 
 /** Keys (1981) cubic-convolution weight (a = −0.5) for a tap at distance t (in steps). */

@@ -55,20 +55,7 @@ export function divergence(
   v: ArrayLike<number>,
   out: Float32Array = new Float32Array(grid.nx * grid.ny),
 ): Float32Array {
-  const { nx, ny, hx, hy, derivativeValid } = grid;
-  fillBorderNaN(nx, ny, out);
-  for (let j = 1; j < ny - 1; j++) {
-    for (let k = j * nx + 1, end = j * nx + nx - 1; k < end; k++) {
-      if (derivativeValid[k] === 0) {
-        out[k] = Number.NaN;
-        continue;
-      }
-      const fluxX = hy[k + 1] * u[k + 1] - hy[k - 1] * u[k - 1];
-      const fluxY = hx[k + nx] * v[k + nx] - hx[k - nx] * v[k - nx];
-      out[k] = (fluxX + fluxY) / (2 * hx[k] * hy[k]);
-    }
-  }
-  return out;
+  return fluxForm(grid, u, v, 1, out);
 }
 
 /**
@@ -82,6 +69,11 @@ export function relativeVorticity(
   v: ArrayLike<number>,
   out: Float32Array = new Float32Array(grid.nx * grid.ny),
 ): Float32Array {
+  return fluxForm(grid, v, u, -1, out);
+}
+
+/** (1/(hx hy)) [∂(hy a)/∂i + sign · ∂(hx b)/∂j] by centred differences: divergence and vorticity share it. */
+function fluxForm(grid: HorizontalGrid, a: ArrayLike<number>, b: ArrayLike<number>, sign: 1 | -1, out: Float32Array): Float32Array {
   const { nx, ny, hx, hy, derivativeValid } = grid;
   fillBorderNaN(nx, ny, out);
   for (let j = 1; j < ny - 1; j++) {
@@ -90,9 +82,9 @@ export function relativeVorticity(
         out[k] = Number.NaN;
         continue;
       }
-      const circulationX = hy[k + 1] * v[k + 1] - hy[k - 1] * v[k - 1];
-      const circulationY = hx[k + nx] * u[k + nx] - hx[k - nx] * u[k - nx];
-      out[k] = (circulationX - circulationY) / (2 * hx[k] * hy[k]);
+      const alongI = hy[k + 1] * a[k + 1] - hy[k - 1] * a[k - 1];
+      const alongJ = hx[k + nx] * b[k + nx] - hx[k - nx] * b[k - nx];
+      out[k] = (alongI + sign * alongJ) / (2 * hx[k] * hy[k]);
     }
   }
   return out;
