@@ -67,7 +67,9 @@ describe("Lambert grid (tangent 38.5°, 40 km)", () => {
     const div = divergence(grid, wind.u, wind.v);
     const vort = relativeVorticity(grid, wind.u, wind.v);
     for (const k of interiorPoints()) {
-      // Source: Derived in closed form (spherical vorticity of u = Ω_b a cos φ; Holton and Hakim 2013)
+      // Source: Derived in closed form (spherical vorticity of u = Ω_b a cos φ; Holton and Hakim 2013), computed
+      // here through the map-factor form ζ = m² [∂(v/m)/∂X − ∂(u/m)/∂Y] of Haltiner and Williams (1980)
+      // (From memory: the chapter and equation number).
       expect(Math.abs(vort[k] / (2 * omega * Math.sin(lat[k] * DEG)) - 1)).toBeLessThan(1e-3);
       expect(Math.abs(div[k])).toBeLessThan(1e-3 * 2 * omega);
     }
@@ -81,7 +83,8 @@ describe("Lambert grid (tangent 38.5°, 40 km)", () => {
     const vort = relativeVorticity(grid, wind.u, wind.v);
     for (const k of interiorPoints()) {
       const expected = (-2 * V * Math.sin(lat[k] * DEG)) / RADIUS;
-      // Source: Derived in closed form (δ = (1/(a cos φ)) ∂(v cos φ)/∂φ; Holton and Hakim 2013)
+      // Source: Derived in closed form (δ = (1/(a cos φ)) ∂(v cos φ)/∂φ; Holton and Hakim 2013), through the
+      // map-factor form δ = m² [∂(u/m)/∂X + ∂(v/m)/∂Y] (Haltiner and Williams 1980; From memory: equation number)
       expect(Math.abs(div[k] / expected - 1)).toBeLessThan(1e-3);
       expect(Math.abs(vort[k])).toBeLessThan(1e-3 * Math.abs(expected));
     }
