@@ -34,6 +34,9 @@ export function startScheduler(ctx: JobContext): Scheduler {
   const report = (name: string) => (err: unknown) => ctx.logger.error({ err }, `${name} failed`);
   const tasks: ScheduledTask[] = [
     cron.schedule(`*/${config.INBOX_POLL_SECONDS} * * * * *`, () => void inbox.poll().catch(report("inbox poll")), { timezone: "UTC", name: "inbox-poll" }),
+    // A safety net after restarts: frames whose evaluation by a current rule version is missing.
+    cron.schedule("*/10 * * * *", () => void ctx.services.evaluation.recheckRecent(24).catch(report("rule re-check")), { timezone: "UTC", name: "rule-recheck" }),
+    cron.schedule("*/5 * * * *", () => void ctx.services.triggers.expireOld().catch(report("trigger expiry")), { timezone: "UTC", name: "trigger-expiry" }),
     cron.schedule("5 * * * *", () => void pruneOldRuns(ctx.dataSource, config.dataDir, config.GRID_RETENTION_DAYS, new Date()).catch(report("grid retention")), {
       timezone: "UTC",
       name: "grid-retention",

@@ -15,6 +15,8 @@ import { createGridsRouter } from "./routes/grids.router.ts";
 import { createEventsRouter } from "./routes/events.router.ts";
 import { createSoundingsRouter } from "./routes/soundings.router.ts";
 import { createZonesRouter } from "./routes/zones.router.ts";
+import { createRulesRouter } from "./routes/rules.router.ts";
+import { createTimelineRouter, createTriggersRouter } from "./routes/triggers.router.ts";
 import { createHealthRouter } from "./routes/health.router.ts";
 import { createAuthRouter } from "./routes/auth.router.ts";
 import { createUsersRouter } from "./routes/users.router.ts";
@@ -85,6 +87,9 @@ export function createApp(deps: AppDeps): BellwetherApp {
   app.use("/api/events", createEventsRouter(services.events, routes));
   app.use("/api/soundings", createSoundingsRouter(routes));
   app.use("/api/zones", createZonesRouter(services.zones, routes));
+  app.use("/api/rules", createRulesRouter(services.rules, services.ruleMaps, routes));
+  app.use("/api/triggers", createTriggersRouter(services.triggers, services.ruleMaps, routes));
+  app.use("/api/timeline", createTimelineRouter(services.triggers, routes));
   app.use("/api", apiNotFound);
 
   if (deps.clientDir && fs.existsSync(path.join(deps.clientDir, "index.html"))) {

@@ -11,7 +11,7 @@ import { openDatabase } from "./db/data-source.ts";
 import { createLogger } from "./logger.ts";
 import { resolveSessionSecret } from "./session-secret.ts";
 import { createApp } from "./app.ts";
-import { isNewDatabase, seedDemoAccounts, seedFirstAdmin } from "./demo/seed.ts";
+import { isNewDatabase, seedDemoAccounts, seedDemoOffice, seedFirstAdmin } from "./demo/seed.ts";
 import { startScheduler, type Scheduler } from "../jobs/scheduler.ts";
 import { createServices, type Services } from "./services/container.ts";
 import { dropDemoRun } from "./demo/drop-demo-run.ts";
@@ -51,6 +51,7 @@ export async function startBellwether(overrides: Partial<Record<string, string>>
 
   const sessionSecret = resolveSessionSecret(config.dataDir, config.SESSION_SECRET);
   const services = createServices(config, dataSource, logger);
+  if (newDatabase && config.DEMO) await seedDemoOffice(services);
   const { app } = createApp({ services, sessionSecret, clientDir: CLIENT_DIR });
   const server = http.createServer(app);
   await new Promise<void>((resolve, reject) => {

@@ -26,8 +26,8 @@ function warp(u: number, v: number): [number, number] {
   return [Number(lon.toFixed(4)), Number(lat.toFixed(4))];
 }
 
-function tile(column: number, row: number): number[][] {
-  const ring: number[][] = [];
+function tile(column: number, row: number): Array<[number, number]> {
+  const ring: Array<[number, number]> = [];
   for (let k = 0; k < STEPS; k++) ring.push(warp(column + k / STEPS, row));
   for (let k = 0; k < STEPS; k++) ring.push(warp(column + 1, row + k / STEPS));
   for (let k = 0; k < STEPS; k++) ring.push(warp(column + 1 - k / STEPS, row + 1));

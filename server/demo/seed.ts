@@ -4,6 +4,9 @@ import { appendAudit, SYSTEM_ACTOR } from "../audit/audit-log.ts";
 import { writeTransaction } from "../db/data-source.ts";
 import { hashPassword } from "../auth/password.ts";
 import { DEMO_ACCOUNTS } from "./demo-staff.ts";
+import { demoZones } from "./demo-zones.ts";
+import { demoRules } from "./demo-rules.ts";
+import type { Services } from "../services/container.ts";
 import type { Role } from "../../shared/auth/permissions.ts";
 
 /** True while no account exists: the only time seeding runs, so nothing stored is overwritten. */
@@ -42,4 +45,10 @@ export async function seedDemoAccounts(dataSource: DataSource, password: string,
 /** The first-run administrator from ADMIN_USERNAME / ADMIN_PASSWORD, on a database with no accounts. */
 export async function seedFirstAdmin(dataSource: DataSource, username: string, password: string, bcryptCost: number): Promise<void> {
   await createAccounts(dataSource, [{ username: username.toLowerCase(), displayName: "Administrator", roles: ["admin"], password }], bcryptCost, "first-run administrator");
+}
+
+/** The invented office's zones and starter rules (the demo run itself arrives through the inbox). */
+export async function seedDemoOffice(services: Pick<Services, "zones" | "rules">): Promise<void> {
+  const zones = await services.zones.importMany(SYSTEM_ACTOR, demoZones());
+  for (const rule of demoRules(zones.map((z) => z.id))) await services.rules.create(SYSTEM_ACTOR, rule);
 }

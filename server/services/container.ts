@@ -8,6 +8,11 @@ import { GridFrameProcessor, type ColumnDiagnoser, type GridDecoder } from "../i
 import { GridQueryService } from "../grids/grid-query.service.ts";
 import { frameExtraDiagnosers } from "../ingest/frame-diagnostics.ts";
 import { ZoneService } from "./zone.service.ts";
+import { RuleService } from "./rule.service.ts";
+import { TriggerService } from "./trigger.service.ts";
+import { EvaluationService } from "./evaluation.service.ts";
+import { RuleMapService } from "../rules/rule-map.service.ts";
+import { SILENT_NOTIFIER, type TriggerNotifier } from "./trigger-notifier.ts";
 import { decodeGridFile } from "../ingest/decode-file.ts";
 import { inProcessColumnDiagnoser, poolColumnDiagnoser } from "../ingest/column-diagnoser.ts";
 import { ColumnDiagnosticsPool } from "../diagnostics/column-pool.ts";
@@ -23,6 +28,10 @@ export interface Services {
   ingest: IngestService;
   grids: GridQueryService;
   zones: ZoneService;
+  rules: RuleService;
+  triggers: TriggerService;
+  evaluation: EvaluationService;
+  ruleMaps: RuleMapService;
   /** Releases worker threads and other resources. */
   close(): Promise<void>;
 }
@@ -30,10 +39,17 @@ export interface Services {
 export interface ServiceOverrides {
   decode?: GridDecoder;
   diagnoseColumns?: ColumnDiagnoser;
+  notifier?: TriggerNotifier;
+  now?: () => Date;
 }
 
 export function createServices(config: AppConfig, dataSource: DataSource, logger: Logger, overrides: ServiceOverrides = {}): Services {
   const events = new EventBus();
+  const now = overrides.now ?? (() => new Date());
+  const zones = new ZoneService(dataSource, now);
+  const rules = new RuleService(dataSource, zones, now);
+  const triggers = new TriggerService(dataSource, events, now);
+  const evaluation = new EvaluationService({ dataSource, dataDir: config.dataDir, rules, zones, triggers, notifier: overrides.notifier ?? SILENT_NOTIFIER, logger, now });
   // DIAGNOSTIC_THREADS=0 or 1 keeps the work on the main thread (tests, tiny grids).
   const threads = config.DIAGNOSTIC_THREADS ?? os.availableParallelism();
   const pool = !overrides.diagnoseColumns && threads > 1 ? new ColumnDiagnosticsPool({ threads }) : null;
@@ -44,7 +60,8 @@ export function createServices(config: AppConfig, dataSource: DataSource, logger
     decode: overrides.decode ?? decodeGridFile,
     diagnoseColumns: overrides.diagnoseColumns ?? (pool ? poolColumnDiagnoser(pool) : inProcessColumnDiagnoser()),
     extraDiagnosers: frameExtraDiagnosers(),
-    onFrameReady: (frameId) => logger.info({ frameId }, "frame ready"),
+    // Every frame that becomes ready is checked against every enabled rule.
+    onFrameReady: (frameId) => evaluation.enqueue(frameId),
   });
   const ingest = new IngestService({ dataSource, dataDir: config.dataDir, events, logger, processor });
   return {
@@ -55,9 +72,14 @@ export function createServices(config: AppConfig, dataSource: DataSource, logger
     users: new UserService(dataSource, config.BCRYPT_COST),
     ingest,
     grids: new GridQueryService(dataSource, config.dataDir),
-    zones: new ZoneService(dataSource),
+    zones,
+    rules,
+    triggers,
+    evaluation,
+    ruleMaps: new RuleMapService(dataSource, config.dataDir, rules, zones),
     async close() {
       await ingest.stop();
+      await evaluation.stop();
       await pool?.destroy();
     },
   };

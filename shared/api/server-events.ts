@@ -25,6 +25,13 @@ export const serverEventSchemas = {
     runTime: z.string(),
     validTime: z.string(),
   }),
+  /** A trigger was opened, changed state, or gained an event (comment, escalation, notification). */
+  "trigger.changed": z.object({
+    triggerId: z.number().int(),
+    kind: z.string(),
+    state: z.string(),
+    severity: z.string(),
+  }),
 } as const;
 
 export type ServerEventName = keyof typeof serverEventSchemas;

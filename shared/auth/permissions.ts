@@ -27,6 +27,13 @@ export const PERMISSIONS = {
   "grids.upload": ["lead", "forecaster", "admin"],
   "zones.read": EVERYONE,
   "zones.write": ["lead"],
+  "rules.read": EVERYONE,
+  "rules.write": ["lead"],
+  "rules.backtest": ["lead"],
+  "triggers.read": EVERYONE,
+  "triggers.acknowledge": ["forecaster", "lead"],
+  "triggers.comment": ["forecaster", "lead"],
+  "triggers.close": ["lead"],
 } as const satisfies Record<string, readonly Role[]>;
 
 export type Permission = keyof typeof PERMISSIONS;

@@ -1,7 +1,7 @@
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import fs from "node:fs";
 import { ROLES, PERMISSIONS, type Role } from "../../shared/auth/permissions.ts";
-import { startTestServer, signIn, anonymous, ingestBytes, DEMO_USER_FOR_ROLE, type SignedInAgent, type TestServer } from "../helpers/test-server.ts";
+import { startTestServer, signIn, anonymous, ingestBytes, insertOpenTrigger, DEMO_USER_FOR_ROLE, type SignedInAgent, type TestServer } from "../helpers/test-server.ts";
 import { fakeGribBytes, syntheticRecords } from "../helpers/synthetic-grid.ts";
 import { SYSTEM_ACTOR } from "../../server/audit/audit-log.ts";
 import type { HttpMethod, RouteEntry } from "../../server/http/route-table.ts";
@@ -24,6 +24,20 @@ interface Example {
 }
 
 let counter = 0;
+const RULE = (over: Record<string, unknown> = {}) => ({
+  name: "Matrix rule",
+  description: "",
+  expression: "shear_0_6km >= 10",
+  zoneIds: [1],
+  severity: "serious",
+  spatialCondition: { kind: "any-point" },
+  validTimeWindow: { kind: "any-time" },
+  persistenceFrames: 1,
+  coolDownHours: 6,
+  recipients: { onCall: true, contactIds: [], groupIds: [] },
+  enabled: true,
+  ...over,
+});
 const SQUARE = { type: "Polygon", coordinates: [[[-99, 35], [-98, 35], [-98, 36], [-99, 36], [-99, 35]]] };
 const SOUNDING = fs.readFileSync("tests/fixtures/soundings/demo-warm-sector.csv", "utf8");
 const EXAMPLES: Record<string, Example> = {
@@ -59,6 +73,26 @@ const EXAMPLES: Record<string, Example> = {
     body: () => ({ type: "FeatureCollection", features: [{ type: "Feature", properties: { code: `I${++counter}`, name: "Imported" }, geometry: SQUARE }] }),
   },
   "patch /api/zones/:id": { path: "/api/zones/1", body: () => ({ name: `Renamed ${++counter}` }) },
+  "get /api/rules/": { path: "/api/rules" },
+  "post /api/rules/check": { path: "/api/rules/check", body: () => ({ expression: "mlcape >= 1000" }) },
+  "post /api/rules/preview": { path: "/api/rules/preview", body: () => ({ expression: "shear_0_6km >= 10", zoneIds: [1] }) },
+  "get /api/rules/:id": { path: "/api/rules/1" },
+  "get /api/rules/:id/versions": { path: "/api/rules/1/versions" },
+  "post /api/rules/": { path: "/api/rules", body: () => RULE({ name: `Matrix rule ${++counter}` }) },
+  "put /api/rules/:id": { path: "/api/rules/1", body: () => ({ ...RULE({ description: `Edit ${++counter}` }), changeNote: "matrix" }) },
+  "post /api/rules/:id/enabled": { path: "/api/rules/1/enabled", body: () => ({ enabled: false, changeNote: "matrix" }) },
+  "delete /api/rules/:id": {
+    path: "",
+    prepare: async () => `/api/rules/${(await server.services.rules.create(SYSTEM_ACTOR, RULE({ name: `To delete ${++counter}` }) as never)).id}`,
+  },
+  "post /api/rules/:id/backtest": { path: "/api/rules/1/backtest", body: () => ({ runs: 2 }) },
+  "get /api/triggers/": { path: "/api/triggers" },
+  "get /api/triggers/:id": { path: "/api/triggers/1" },
+  "get /api/triggers/:id/frames/:frameId/mask": { path: "/api/triggers/1/frames/1/mask" },
+  "post /api/triggers/:id/acknowledge": { path: "", prepare: async () => `/api/triggers/${await insertOpenTrigger(server, 1, 1)}/acknowledge`, body: () => ({}) },
+  "post /api/triggers/:id/comments": { path: "/api/triggers/1/comments", body: () => ({ text: "Matrix comment" }) },
+  "post /api/triggers/:id/false-alarm": { path: "", prepare: async () => `/api/triggers/${await insertOpenTrigger(server, 1, 1)}/false-alarm`, body: () => ({ reason: "Matrix check" }) },
+  "get /api/timeline/": { path: "/api/timeline" },
   "delete /api/zones/:id": {
     path: "",
     // Each cell deletes a zone of its own, so zone 1 stays for the other cells.
@@ -102,8 +136,11 @@ beforeAll(async () => {
   // Each upload names its own model, so later uploads never replace the seeded frame.
   server = await startTestServer({}, { decode: (bytes) => syntheticRecords({ model: Buffer.from(bytes).toString("latin1").slice(8) }) });
   // One ingested frame (id 1) so the frame routes have something to answer with.
-  await ingestBytes(server, fakeGribBytes("matrix-seed"), "seed.grib2");
+  // Zone 1, rule 1, then frame 1, which opens trigger 1.
   await server.services.zones.create(SYSTEM_ACTOR, { code: "SEED", name: "Seed zone", geometry: SQUARE as never });
+  await server.services.rules.create(SYSTEM_ACTOR, RULE() as never);
+  await ingestBytes(server, fakeGribBytes("matrix-seed"), "seed.grib2");
+  await server.services.evaluation.idle();
 });
 afterAll(async () => server.close());
 

@@ -30,6 +30,8 @@ export interface SyntheticOptions {
   /** Leave out one parameter, to test the missing-field message. */
   omit?: ModelParameter;
   model?: string;
+  /** Multiplies the wind's growth with height (1 = the default profile; 0 = no shear aloft). */
+  shearScale?: number;
 }
 
 export function syntheticRecords(options: SyntheticOptions = {}): GridRecord[] {
@@ -54,7 +56,7 @@ export function syntheticRecords(options: SyntheticOptions = {}): GridRecord[] {
       const t = Math.max(288 - 0.0065 * z, 216.65);
       push("temperature", "isobaric", p * 100, field((i) => t + 0.3 * i));
       push("dewpoint", "isobaric", p * 100, field((i) => t - 4 - (p < 700 ? 15 : 0) + 0.2 * i));
-      push("u_wind", "isobaric", p * 100, field(() => 5 + (z / 1000) * 3));
+      push("u_wind", "isobaric", p * 100, field(() => 5 + (z / 1000) * 3 * (options.shearScale ?? 1)));
       push("v_wind", "isobaric", p * 100, field((_, j) => 8 - z / 2000 + j * 0.1));
       push("geopotential_height", "isobaric", p * 100, field(() => z));
     }

@@ -79,3 +79,34 @@ export async function ingestBytes(server: TestServer, bytes: Buffer, name: strin
   await server.services.ingest.idle();
   return result;
 }
+
+let fixtureTriggers = 0;
+/** An open trigger row made directly, for tests that need one to act on (the engine's own path is tested elsewhere). */
+export async function insertOpenTrigger(server: TestServer, ruleId: number, zoneId: number): Promise<number> {
+  const { TriggerEntity } = await import("../../server/entities/trigger.entity.ts");
+  const { RuleEntity } = await import("../../server/entities/rule.entity.ts");
+  const rule = await server.dataSource.getRepository(RuleEntity).findOneByOrFail({ id: ruleId });
+  const at = new Date().toISOString();
+  const saved = await server.dataSource.getRepository(TriggerEntity).save({
+    triggerKey: `fixture-${++fixtureTriggers}-${Date.now()}`,
+    ruleId,
+    ruleVersionId: rule.currentVersionId!,
+    zoneId,
+    severity: "serious",
+    state: "open",
+    model: "fixture",
+    runTime: at,
+    firstValidTime: at,
+    lastValidTime: at,
+    matchedValidTimes: JSON.stringify([at]),
+    peak: JSON.stringify({ coveragePercent: 50, matchedPoints: 3, fields: [] }),
+    openedAt: at,
+    updatedAt: at,
+    acknowledgedBy: null,
+    acknowledgedAt: null,
+    closedAt: null,
+    closedBy: null,
+    closeReason: null,
+  });
+  return saved.id;
+}
