@@ -1,4 +1,4 @@
-import { SoundingsPage } from "@/features/soundings/soundings-page.tsx";
+import { SoundingsPage } from "@/features/soundings/components/soundings-page.tsx";
 
 /** Lazy route module: React Router picks up `Component`. */
 export function Component() {

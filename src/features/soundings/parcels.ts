@@ -1,0 +1,23 @@
+/** The three parcels the library lifts, in the order the toggle cycles through them. */
+export const PARCEL_IDS = ["sb", "ml", "mu"] as const;
+export type ParcelId = (typeof PARCEL_IDS)[number];
+
+export const PARCEL_NAMES: Record<ParcelId, string> = {
+  sb: "Surface-based",
+  ml: "Mixed-layer (lowest 100 hPa)",
+  mu: "Most-unstable",
+};
+
+export const PARCEL_TAGS: Record<ParcelId, string> = { sb: "SB", ml: "ML", mu: "MU" };
+
+/** The mixed-layer parcel is the usual first look, so its areas are shaded when the page opens. */
+export const DEFAULT_SHADED_PARCEL: ParcelId = "ml";
+
+export function nextParcel(id: ParcelId): ParcelId {
+  return PARCEL_IDS[(PARCEL_IDS.indexOf(id) + 1) % PARCEL_IDS.length];
+}
+
+/** Catalogue keys of one parcel's fields. */
+export function parcelFieldKeys(id: ParcelId) {
+  return { cape: `${id}cape`, cin: `${id}cin`, el: `${id}el_hgt` } as const;
+}
