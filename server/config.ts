@@ -1,5 +1,6 @@
 import { z } from "zod";
 import path from "node:path";
+import { jetSettingsInput } from "../shared/meteo/jet/jet-settings.ts";
 
 const boolFromEnv = z
   .enum(["1", "0", "true", "false", "yes", "no", "on", "off"])
@@ -28,6 +29,21 @@ const configSchema = z.object({
   INBOX_DIR: z.string().min(1).optional(),
   INBOX_POLL_SECONDS: z.coerce.number().int().min(2).max(3600).default(15),
   GRID_RETENTION_DAYS: z.coerce.number().positive().max(3650).default(14),
+  /** Office jet-streak settings as JSON (e.g. {"jetLevelMode":"max-wind","coreSpeed":45}); defaults otherwise. */
+  JET_SETTINGS: z
+    .string()
+    .optional()
+    .transform((text, ctx) => {
+      if (!text) return undefined;
+      try {
+        const parsed = jetSettingsInput.safeParse(JSON.parse(text));
+        if (parsed.success) return parsed.data;
+        ctx.addIssue({ code: "custom", message: parsed.error.issues.map((i) => `${i.path.join(".")}: ${i.message}`).join("; ") });
+      } catch {
+        ctx.addIssue({ code: "custom", message: "JET_SETTINGS is not valid JSON" });
+      }
+      return z.NEVER;
+    }),
   DIAGNOSTIC_THREADS: z.coerce.number().int().min(0).max(64).optional(),
   PUBLIC_URL: z.string().url().optional(),
 });

@@ -49,6 +49,20 @@ export function demoRules(zoneIds: readonly number[]): CreateRuleInput[] {
       enabled: true,
     },
     {
+      name: "Jet streak lift over instability",
+      description:
+        "Where the upper jet streak favours divergence aloft (left exit or right entrance of a straight streak, adjusted for curvature) over buoyant, sheared air.",
+      expression: "jet_div_favoured == 1 and mucape >= 1000 and shear_0_6km >= 18",
+      zoneIds: [...zoneIds],
+      severity: "serious",
+      spatialCondition: { kind: "min-coverage", percent: 15 },
+      validTimeWindow: anyTime,
+      persistenceFrames: 1,
+      coolDownHours: 6,
+      recipients,
+      enabled: true,
+    },
+    {
       name: "Capped but loaded",
       description: "Large buoyancy held under a strong cap: quiet until the cap breaks.",
       expression: "mlcape >= 2500 and mlcin <= -100",

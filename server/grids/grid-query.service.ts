@@ -104,6 +104,14 @@ export class GridQueryService {
     return { frame, geometry, values };
   }
 
+  /** The jet-streak document stored with a frame (empty when the frame predates jet diagnostics). */
+  async jetStreaks(frameId: number): Promise<{ jetLevelPressure: number | null; streaks: unknown[]; warnings: string[] }> {
+    const frame = await this.getFrameEntity(frameId);
+    const file = path.join(this.dataDir, frame.folder, "jet-streaks.json");
+    if (!fs.existsSync(file)) return { jetLevelPressure: null, streaks: [], warnings: ["This frame was stored before jet-streak diagnostics."] };
+    return JSON.parse(fs.readFileSync(file, "utf8")) as { jetLevelPressure: number | null; streaks: unknown[]; warnings: string[] };
+  }
+
   /** The model column nearest a point, as a sounding (skew-T, hodograph and every column field). */
   async columnAt(frameId: number, lat: number, lon: number): Promise<ColumnAtPoint> {
     const frame = await this.getFrameEntity(frameId);

@@ -28,8 +28,8 @@ export type GridDecoder = (bytes: Uint8Array, format: GridFileFormat) => GridRec
 /** Runs the column diagnostics over a frame's grid; reports the fraction done. */
 export type ColumnDiagnoser = (frame: FrameInput, onProgress: (fraction: number) => void) => Promise<ColumnGridOutput>;
 
-/** Extra derived fields (e.g. the jet diagnostics), keyed by catalogue key. */
-export type ExtraDiagnoser = (frame: FrameInput) => Promise<Record<string, Float32Array>>;
+/** Extra derived fields (e.g. the jet diagnostics) by catalogue key, and JSON documents stored beside them. */
+export type ExtraDiagnoser = (frame: FrameInput) => Promise<{ fields: Record<string, Float32Array>; documents?: Record<string, unknown> }>;
 
 export interface FrameProcessorDeps {
   dataSource: DataSource;
@@ -77,8 +77,15 @@ export class GridFrameProcessor implements FrameProcessor {
           }
         });
         const extras: Record<string, Float32Array> = {};
-        for (const extra of this.deps.extraDiagnosers ?? []) Object.assign(extras, await extra(frame));
         const folder = path.join(partialRoot, `frame-${index}`);
+        for (const extra of this.deps.extraDiagnosers ?? []) {
+          const result = await extra(frame);
+          Object.assign(extras, result.fields);
+          for (const [name, document] of Object.entries(result.documents ?? {})) {
+            fs.mkdirSync(folder, { recursive: true });
+            fs.writeFileSync(path.join(folder, `${name}.json`), JSON.stringify(document));
+          }
+        }
         written.push({ frame, folder, fields: this.writeFrameFiles(folder, frame, columns, extras) });
       }
       await progress("diagnosing", 0.97, "Storing frames");

@@ -86,6 +86,12 @@ export function createGridsRouter(deps: GridsRouterDeps, table: RouteEntry[]): R
     res.send(Buffer.from(values.buffer, values.byteOffset, values.byteLength));
   });
 
+  // Jet streaks found on the frame's jet level: cores, axes, curvature, data-quality notes.
+  routes.get("/frames/:id/jet-streaks", "grids.read", async (req, res) => {
+    const { id } = parseInput(idParams, req.params, "params");
+    res.json(await deps.grids.jetStreaks(id));
+  });
+
   routes.get("/frames/:id/column", "grids.read", async (req, res) => {
     const { id } = parseInput(idParams, req.params, "params");
     const { lat, lon } = parseInput(latLonQuery, req.query, "query");

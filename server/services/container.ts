@@ -59,7 +59,7 @@ export function createServices(config: AppConfig, dataSource: DataSource, logger
     events,
     decode: overrides.decode ?? decodeGridFile,
     diagnoseColumns: overrides.diagnoseColumns ?? (pool ? poolColumnDiagnoser(pool) : inProcessColumnDiagnoser()),
-    extraDiagnosers: frameExtraDiagnosers(),
+    extraDiagnosers: frameExtraDiagnosers(config.JET_SETTINGS),
     // Every frame that becomes ready is checked against every enabled rule.
     onFrameReady: (frameId) => evaluation.enqueue(frameId),
   });

@@ -61,6 +61,7 @@ const EXAMPLES: Record<string, Example> = {
   "get /api/grids/runs": { path: "/api/grids/runs" },
   "get /api/grids/frames/:id": { path: "/api/grids/frames/1" },
   "get /api/grids/frames/:id/fields/:key": { path: "/api/grids/frames/1/fields/mlcape" },
+  "get /api/grids/frames/:id/jet-streaks": { path: "/api/grids/frames/1/jet-streaks" },
   "get /api/grids/frames/:id/column": { path: "/api/grids/frames/1/column?lat=35&lon=-99" },
   "get /api/events/": { path: "/api/events", stream: true },
   "post /api/soundings/diagnose": { path: "/api/soundings/diagnose", body: () => ({ csv: SOUNDING }) },

@@ -2,7 +2,7 @@ import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { startTestServer, signIn, ingestBytes, type SignedInAgent, type TestServer } from "../helpers/test-server.ts";
 import { fakeGribBytes, syntheticRecords, SYNTHETIC_GEOMETRY } from "../helpers/synthetic-grid.ts";
 import { demoZones } from "../../server/demo/demo-zones.ts";
-import { zoneGeometryProblems, zoneMask, ringsContain } from "../../shared/zones/zone-geometry.ts";
+import { zoneGeometryProblems, zoneMask, ringsContain, type ZoneGeometry } from "../../shared/zones/zone-geometry.ts";
 import { gridCoordinates } from "../../shared/grid/grid-coordinates.ts";
 
 let server: TestServer;
@@ -10,10 +10,8 @@ let lead: SignedInAgent;
 const post = (path: string, body: object) => lead.agent.post(path).set("x-csrf-token", lead.csrf).send(body);
 
 // A square around the synthetic grid's points (34–36° N, 100–97.5° W).
-const square = (west: number, south: number, east: number, north: number) => ({
-  type: "Polygon" as const,
-  coordinates: [[[west, south], [east, south], [east, north], [west, north], [west, south]]],
-});
+const square = (west: number, south: number, east: number, north: number) =>
+  ({ type: "Polygon", coordinates: [[[west, south], [east, south], [east, north], [west, north], [west, south]]] }) as ZoneGeometry & { type: "Polygon" };
 
 beforeAll(async () => {
   server = await startTestServer({}, { decode: () => syntheticRecords() });
@@ -28,17 +26,17 @@ describe("zone geometry checks", () => {
   });
 
   it("names a self-intersecting ring, an open ring and a short ring", () => {
-    const bowtie = { type: "Polygon" as const, coordinates: [[[0, 0], [1, 1], [1, 0], [0, 1], [0, 0]]] };
+    const bowtie = { type: "Polygon", coordinates: [[[0, 0], [1, 1], [1, 0], [0, 1], [0, 0]]] } as ZoneGeometry;
     expect(zoneGeometryProblems(bowtie)[0]).toMatch(/crosses itself between vertices 1–2 and 3–4/);
-    const open = { type: "Polygon" as const, coordinates: [[[0, 0], [1, 0], [1, 1], [0, 1]]] };
+    const open = { type: "Polygon", coordinates: [[[0, 0], [1, 0], [1, 1], [0, 1]]] } as ZoneGeometry;
     expect(zoneGeometryProblems(open)[0]).toMatch(/not closed/);
-    const short = { type: "Polygon" as const, coordinates: [[[0, 0], [1, 0], [0, 0]]] };
+    const short = { type: "Polygon", coordinates: [[[0, 0], [1, 0], [0, 0]]] } as ZoneGeometry;
     expect(zoneGeometryProblems(short)[0]).toMatch(/at least 4 positions/);
   });
 
   it("tells inside from outside, holes included", () => {
     // Common practice (no source): the even-odd rule leaves a hole's interior outside the polygon.
-    const rings = [square(0, 0, 10, 10).coordinates[0]!, square(4, 4, 6, 6).coordinates[0]!];
+    const rings = [square(0, 0, 10, 10).coordinates[0]!, square(4, 4, 6, 6).coordinates[0]!] as number[][][];
     expect(ringsContain(rings, 2, 2)).toBe(true);
     expect(ringsContain(rings, 5, 5)).toBe(false);
     expect(ringsContain(rings, 11, 5)).toBe(false);

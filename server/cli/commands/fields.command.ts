@@ -37,7 +37,7 @@ export async function fieldsAtPoint(bytes: Uint8Array, at: { lat: number; lon: n
     const columns = allocateColumnGridOutput(frame.grid.pointCount);
     diagnoseColumnGrid(frame.grid, columns, undefined, { start: point.index, end: point.index + 1 });
     const extras: Record<string, Float32Array> = {};
-    for (const extra of frameExtraDiagnosers()) Object.assign(extras, await extra(frame));
+    for (const extra of frameExtraDiagnosers()) Object.assign(extras, (await extra(frame)).fields);
     const fields: Record<string, number | null> = {};
     for (const def of FIELDS) {
       const array = (columns as Record<string, Float32Array>)[def.key] ?? extras[def.key];
