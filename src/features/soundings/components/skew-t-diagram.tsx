@@ -4,6 +4,7 @@ import { useTheme } from "@/lib/theme.tsx";
 import { chartPalette, PARCEL_DASHES } from "../chart/chart-palette.ts";
 import { pressureAtHeight } from "../chart/profile-interpolation.ts";
 import { levelMarkers, shadedAreas, skewTData } from "../chart/skew-t-data.ts";
+import { spreadUpward } from "../chart/label-spread.ts";
 import { pathThrough } from "../chart/skew-t-geometry.ts";
 import { BARB_COLUMN_X, HEIGHT_MARKS, SKEW_T_FRAME, SKEW_T_GEOMETRY, SKEW_T_VIEW } from "../chart/skew-t-layout.ts";
 import { PARCEL_TAGS, type ParcelId } from "../parcels.ts";
@@ -36,6 +37,8 @@ export function SkewTDiagram({ report, shaded }: { report: SoundingReportDto; sh
   const data = useMemo(() => skewTData(report), [report]);
   const areas = useMemo(() => shadedAreas(data, shaded), [data, shaded]);
   const markers = useMemo(() => levelMarkers(data, shaded), [data, shaded]);
+  // An LFC just above the LCL would print its label over the LCL's.
+  const markerLabelYs = spreadUpward(markers.map((m) => g.yOfPressure(m.pressure)), 12);
   const [cursorY, setCursorY] = useState<number | null>(null);
   const side = report.meta.options.hemisphere === "south" ? -1 : 1;
   // Draw the shaded parcel last so it sits on top of the other two.
@@ -101,13 +104,13 @@ export function SkewTDiagram({ report, shaded }: { report: SoundingReportDto; sh
       </g>
 
       <g fontSize={10} className="font-mono" fill={palette.parcels[shaded]}>
-        {markers.map((m) => {
+        {markers.map((m, i) => {
           const x = g.xOf(m.temperature, m.pressure);
           const y = g.yOfPressure(m.pressure);
           return (
             <g key={m.kind} data-marker={m.kind}>
               <line x1={x - 9} x2={x + 9} y1={y} y2={y} stroke={palette.parcels[shaded]} strokeWidth={2} />
-              <text x={x + 13} y={y + 3.5}>
+              <text x={x + 13} y={markerLabelYs[i] + 3.5}>
                 {PARCEL_TAGS[shaded]} {m.kind}
               </text>
             </g>
