@@ -10,6 +10,7 @@ import { diagnoseColumn } from "../../shared/meteo/index.ts";
 import { decodeGridFile } from "../../server/ingest/decode-file.ts";
 import { assembleFrames } from "../../server/ingest/assemble-frames.ts";
 import { nearestGridPoint } from "../../shared/grid/grid-coordinates.ts";
+import { parseRule } from "../../shared/rules/index.ts";
 
 /** Parses a `grib_get_data` listing: one block per message, each line "lat lon value". */
 function ecCodesListing(file: string): Array<Array<[number, number, number]>> {
@@ -120,5 +121,37 @@ describe("fields", () => {
     const outside = runCli(["fields", file, "--at", "10,10", "--json"]);
     expect(outside.status).toBe(1);
     expect(outside.stderr).toContain("outside the grid");
+  });
+});
+
+describe("evaluate", () => {
+  const dir = fs.mkdtempSync(path.join(os.tmpdir(), "bellwether-eval-"));
+  const gridFile = path.join(dir, "demo.grib2");
+  fs.writeFileSync(gridFile, demoGribFile({ runTime: new Date("2026-05-14T12:00:00Z"), forecastHours: [4], nx: 30, ny: 24 }, 4));
+  const zonesFile = path.join(dir, "zones.geojson");
+  fs.writeFileSync(
+    zonesFile,
+    JSON.stringify({
+      type: "FeatureCollection",
+      features: [{ type: "Feature", properties: { code: "ALL", name: "Everything" }, geometry: { type: "Polygon", coordinates: [[[-110, 25], [-85, 25], [-85, 45], [-110, 45], [-110, 25]]] } }],
+    }),
+  );
+
+  it("reports matched points, coverage, field extremes and the spatial condition per zone", () => {
+    const out = runCli(["evaluate", gridFile, "--expr", "shear_0_6km >= 0", "--zones", zonesFile, "--min-coverage", "100", "--json"]);
+    expect(out.status).toBe(0);
+    const json = JSON.parse(out.stdout);
+    const zone = json.frames[0].zones[0];
+    // Every column has a bulk shear value, so a threshold of 0 m/s is met at every grid point.
+    expect(zone).toMatchObject({ code: "ALL", zonePoints: 720, matchedPoints: 720, coveragePercent: 100, conditionMet: true });
+    expect(zone.extremes.shear_0_6km.max).toBeGreaterThan(zone.extremes.shear_0_6km.min);
+  });
+
+  it("exits non-zero with the editor's message for a bad expression", () => {
+    const out = runCli(["evaluate", gridFile, "--expr", "mlcape >= 1000 and shaer_0_6km >= 20", "--json"]);
+    expect(out.status).toBe(1);
+    const editorMessage = parseRule("mlcape >= 1000 and shaer_0_6km >= 20");
+    expect(editorMessage.ok).toBe(false);
+    expect(out.stderr).toContain(!editorMessage.ok ? editorMessage.errors[0]!.message : "");
   });
 });
