@@ -46,7 +46,7 @@ export async function run(): Promise<void> {
   await pool.destroy();
   const extras: Record<string, Float32Array> = {};
   await timed("jet-level diagnostics", async () => {
-    for (const extra of frameExtraDiagnosers()) Object.assign(extras, await extra(frame));
+    for (const extra of frameExtraDiagnosers()) Object.assign(extras, (await extra(frame)).fields);
   });
   const out = fs.mkdtempSync(path.join(os.tmpdir(), "bellwether-bench-store-"));
   await timed("store fields (Float32 files)", () => {
