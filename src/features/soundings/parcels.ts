@@ -2,10 +2,13 @@
 export const PARCEL_IDS = ["sb", "ml", "mu"] as const;
 export type ParcelId = (typeof PARCEL_IDS)[number];
 
-export const PARCEL_NAMES: Record<ParcelId, string> = {
-  sb: "Surface-based",
-  ml: "Mixed-layer (lowest 100 hPa)",
-  mu: "Most-unstable",
+export const PARCEL_NAMES: Record<ParcelId, string> = { sb: "surface-based", ml: "mixed-layer", mu: "most-unstable" };
+
+/** Where each parcel starts, for legends and tooltips. */
+export const PARCEL_ORIGINS: Record<ParcelId, string> = {
+  sb: "lifted from the surface",
+  ml: "mean of the lowest 100 hPa",
+  mu: "highest θe in the lowest 300 hPa",
 };
 
 export const PARCEL_TAGS: Record<ParcelId, string> = { sb: "SB", ml: "ML", mu: "MU" };

@@ -21,7 +21,7 @@ export function skewTSummary(report: SoundingReportDto, shaded: ParcelId): strin
   return [
     `Skew-T diagram: SBCAPE ${fieldText("sbcape", f)}, MLCAPE ${fieldText("mlcape", f)}, MUCAPE ${fieldText("mucape", f)}`,
     `MLCIN ${fieldText("mlcin", f)}, ML LCL ${fieldText("mllcl_hgt", f)}`,
-    `shaded areas: ${PARCEL_NAMES[shaded].toLowerCase()} parcel (${PARCEL_TAGS[shaded]}CAPE ${fieldText(keys.cape, f)}, ${PARCEL_TAGS[shaded]}CIN ${fieldText(keys.cin, f)})`,
+    `shaded areas: ${PARCEL_NAMES[shaded]} parcel (${PARCEL_TAGS[shaded]}CAPE ${fieldText(keys.cape, f)}, ${PARCEL_TAGS[shaded]}CIN ${fieldText(keys.cin, f)})`,
   ].join(", ") + ".";
 }
 

@@ -1,14 +1,8 @@
+import type { SoundingLevelDto } from "@shared/api/soundings.ts";
 import { mixingRatioFromVaporPressure, saturationVaporPressure, virtualTemperature } from "@shared/meteo/index.ts";
 
-/** The environment levels the charts read (SI units, surface first, pressure falling upward). */
-export interface ProfileLevel {
-  pressure: number;
-  height: number;
-  temperature: number;
-  dewpoint: number;
-  u: number | null;
-  v: number | null;
-}
+/** The environment levels the charts read: the report's levels (SI units, surface first, pressure falling upward). */
+export type ProfileLevel = SoundingLevelDto;
 
 export interface EnvironmentSample {
   pressure: number;
@@ -17,11 +11,20 @@ export interface EnvironmentSample {
   dewpoint: number;
 }
 
+/**
+ * Parcel nodes come back as exp(ln p), a hair off the level they were taken at (98500 → 98500.00000000001):
+ * pressures this close to the profile's ends count as the end itself.
+ */
+const END_TOLERANCE = 1e-9;
+
 /** Index k such that levels[k] and levels[k+1] bracket the pressure, or -1 outside the profile. */
 function bracketByPressure(levels: readonly ProfileLevel[], pressure: number): number {
-  if (levels.length < 2 || pressure > levels[0].pressure || pressure < levels[levels.length - 1].pressure) return -1;
+  if (levels.length < 2) return -1;
+  const bottom = levels[0].pressure;
+  const top = levels[levels.length - 1].pressure;
+  if (pressure > bottom * (1 + END_TOLERANCE) || pressure < top * (1 - END_TOLERANCE)) return -1;
   for (let k = 0; k < levels.length - 1; k++) if (pressure >= levels[k + 1].pressure) return k;
-  return -1;
+  return levels.length - 2;
 }
 
 /** T, Td and height at a pressure, each linear in ln p between levels (the library's column convention); null outside. */
@@ -30,7 +33,7 @@ export function environmentAt(levels: readonly ProfileLevel[], pressure: number)
   if (k < 0) return null;
   const a = levels[k];
   const b = levels[k + 1];
-  const f = (Math.log(a.pressure) - Math.log(pressure)) / (Math.log(a.pressure) - Math.log(b.pressure));
+  const f = Math.min(1, Math.max(0, (Math.log(a.pressure) - Math.log(pressure)) / (Math.log(a.pressure) - Math.log(b.pressure))));
   const mix = (x: number, y: number) => x + f * (y - x);
   return { pressure, height: mix(a.height, b.height), temperature: mix(a.temperature, b.temperature), dewpoint: mix(a.dewpoint, b.dewpoint) };
 }
@@ -70,8 +73,9 @@ export function temperatureOnPath(points: ReadonlyArray<{ pressure: number; temp
   for (let k = 0; k < points.length - 1; k++) {
     const a = points[k];
     const b = points[k + 1];
-    if (pressure <= a.pressure && pressure >= b.pressure && a.pressure > b.pressure) {
-      const f = (Math.log(a.pressure) - Math.log(pressure)) / (Math.log(a.pressure) - Math.log(b.pressure));
+    const inside = pressure <= a.pressure * (1 + END_TOLERANCE) && pressure >= b.pressure * (1 - END_TOLERANCE);
+    if (inside && a.pressure > b.pressure) {
+      const f = Math.min(1, Math.max(0, (Math.log(a.pressure) - Math.log(pressure)) / (Math.log(a.pressure) - Math.log(b.pressure))));
       return a.temperature + f * (b.temperature - a.temperature);
     }
   }

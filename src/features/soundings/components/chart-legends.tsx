@@ -5,7 +5,7 @@ import { useTheme } from "@/lib/theme.tsx";
 import { bandColor, chartPalette, PARCEL_DASHES } from "../chart/chart-palette.ts";
 import { HEIGHT_BANDS } from "../chart/hodograph-geometry.ts";
 import { fieldText } from "../field-groups.ts";
-import { PARCEL_IDS, PARCEL_NAMES, PARCEL_TAGS, type ParcelId } from "../parcels.ts";
+import { PARCEL_IDS, PARCEL_NAMES, PARCEL_ORIGINS, PARCEL_TAGS, type ParcelId } from "../parcels.ts";
 import { directionFrom } from "../sounding-summary.ts";
 
 function LineSwatch({ color, dash, width = 2.4 }: { color: string; dash?: string; width?: number }) {
@@ -47,7 +47,7 @@ export function SkewTLegend({ shaded, virtual }: { shaded: ParcelId; virtual: bo
         <Item swatch={<AreaSwatch color={palette.negativeArea} />}>CIN ({PARCEL_TAGS[shaded]})</Item>
       </ul>
       <p className="mt-1.5">
-        {PARCEL_NAMES[shaded]} parcel shaded.{" "}
+        Shaded: the {PARCEL_NAMES[shaded]} parcel ({PARCEL_ORIGINS[shaded]}).{" "}
         {virtual
           ? "Parcel paths and areas use virtual temperature, as the CAPE and CIN numbers do (Doswell and Rasmussen 1994)."
           : "The virtual-temperature correction is off for this report."}{" "}

@@ -48,7 +48,6 @@ export function SoundingWorkbench() {
       {mutation.isPending && <Loading label="Computing the sounding…" />}
       {shown && (
         <SoundingResults
-          key={shown.submission.label}
           report={shown.report}
           title={titleOf(shown.submission)}
           note={
