@@ -12,6 +12,13 @@ import { RuleVersionEntity } from "../entities/rule-version.entity.ts";
 import { RuleEvaluationEntity } from "../entities/rule-evaluation.entity.ts";
 import { TriggerEntity } from "../entities/trigger.entity.ts";
 import { TriggerEventEntity } from "../entities/trigger-event.entity.ts";
+import { ContactEntity } from "../entities/contact.entity.ts";
+import { ContactGroupEntity } from "../entities/contact-group.entity.ts";
+import { ContactGroupMemberEntity } from "../entities/contact-group-member.entity.ts";
+import { OnCallShiftEntity } from "../entities/on-call-shift.entity.ts";
+import { NotificationEntity } from "../entities/notification.entity.ts";
+import { DeliveryAttemptEntity } from "../entities/delivery-attempt.entity.ts";
+import { NotifySettingEntity } from "../entities/notify-setting.entity.ts";
 
 /** Every entity the data source knows; add new ones here. */
 export const ENTITIES = [
@@ -29,4 +36,11 @@ export const ENTITIES = [
   RuleEvaluationEntity,
   TriggerEntity,
   TriggerEventEntity,
+  ContactEntity,
+  ContactGroupEntity,
+  ContactGroupMemberEntity,
+  OnCallShiftEntity,
+  NotificationEntity,
+  DeliveryAttemptEntity,
+  NotifySettingEntity,
 ];
