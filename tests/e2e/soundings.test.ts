@@ -5,7 +5,7 @@ import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import type { APIRequestContext, Browser, BrowserContext, Page } from "playwright-core";
 import { demoGribFile } from "../../server/demo/demo-run.ts";
 import { soundingLinkForPoint } from "../../src/config/paths.ts";
-import { launchBrowser, screenshot } from "./helpers/browser.ts";
+import { launchBrowser, screenshot, SCREENSHOT_DIR } from "./helpers/browser.ts";
 import { startE2eServer, E2E_PASSWORD } from "./helpers/server.ts";
 import { signInThroughPage } from "./helpers/sign-in.ts";
 
@@ -91,11 +91,15 @@ describe("Soundings page in a real browser", () => {
       expect(await hodograph.getByTestId("storm-rm").count()).toBe(1);
       expect(await hodograph.getByTestId("storm-lm").count()).toBe(1);
 
+      await screenshot(page, "soundings-uploaded-dark");
+      await hodograph.screenshot({ path: path.join(SCREENSHOT_DIR, "soundings-hodograph-dark.png") });
+
       // Hovering the diagram reads the profile under the pointer.
+      await skewT.scrollIntoViewIfNeeded();
       const box = (await skewT.boundingBox())!;
       await page.mouse.move(box.x + box.width * 0.45, box.y + box.height * 0.6);
       await expect.poll(() => page.getByTestId("skew-t-readout").textContent()).toMatch(/hPa · [\d,]+ m AGL.*T -?[\d.]+ °C · Td/);
-      await screenshot(page, "soundings-uploaded-dark");
+      await skewT.screenshot({ path: path.join(SCREENSHOT_DIR, "soundings-skew-t-dark.png") });
 
       // "p" cycles the shaded parcel (ML is first, MU next).
       await page.mouse.move(0, 0);
