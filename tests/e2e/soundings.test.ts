@@ -112,7 +112,7 @@ describe("Soundings page in a real browser", () => {
     }
   });
 
-  it("shows the line-numbered error beside the input for a malformed file", async () => {
+  it("shows the line-numbered error beside the input for a malformed file, and takes a dropped file", async () => {
     const bad = path.join(scratch, "dewpoint-above-temperature.csv");
     const lines = fs.readFileSync(FIXTURE, "utf8").split("\n");
     lines[3] = "950,565,25.0,27.0,180,33"; // file line 4: dewpoint above temperature
@@ -135,6 +135,16 @@ describe("Soundings page in a real browser", () => {
       });
       expect(selected).toBe("950,565,25.0,27.0,180,33");
       await screenshot(page, "soundings-malformed-file");
+
+      // Dropping a good file on the drop zone replaces the error with its result.
+      const dataTransfer = await page.evaluateHandle((text) => {
+        const transfer = new DataTransfer();
+        transfer.items.add(new File([text], "dropped.csv", { type: "text/csv" }));
+        return transfer;
+      }, fs.readFileSync(FIXTURE, "utf8"));
+      await page.getByText("Drop a sounding file here").dispatchEvent("drop", { dataTransfer });
+      await expect.poll(() => title(page).textContent(), { timeout: 20_000 }).toBe("File: dropped.csv");
+      expect(await page.getByTestId("sounding-error").count()).toBe(0);
     } finally {
       await context.close();
     }
