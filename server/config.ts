@@ -46,6 +46,43 @@ const configSchema = z.object({
     }),
   DIAGNOSTIC_THREADS: z.coerce.number().int().min(0).max(64).optional(),
   PUBLIC_URL: z.string().url().optional(),
+  // Notifications. Without SMTP_HOST (or without the Twilio account) the app starts its own local fake.
+  SMTP_HOST: z.string().min(1).optional(),
+  SMTP_PORT: z.coerce.number().int().min(1).max(65535).default(587),
+  SMTP_SECURE: boolFromEnv.default(false),
+  SMTP_USER: z.string().min(1).optional(),
+  SMTP_PASS: z.string().min(1).optional(),
+  MAIL_FROM: z.string().min(3).default("Bellwether <bellwether@localhost>"),
+  TWILIO_ACCOUNT_SID: z.string().regex(/^AC[0-9a-fA-F]{32}$/, "TWILIO_ACCOUNT_SID is AC followed by 32 hex digits").optional(),
+  TWILIO_AUTH_TOKEN: z.string().min(8).optional(),
+  TWILIO_FROM: z.string().regex(/^\+[1-9]\d{6,14}$/, "TWILIO_FROM is a sending number in E.164, e.g. +15550100999").default("+15550100999"),
+  /** Fixed ports for the local fakes (0 = any free port). */
+  FAKE_SMTP_PORT: z.coerce.number().int().min(0).max(65535).default(0),
+  FAKE_SMS_PORT: z.coerce.number().int().min(0).max(65535).default(0),
+  OFFICE_TIME_ZONE: z
+    .string()
+    .default("America/Chicago")
+    .refine((tz) => {
+      try {
+        new Intl.DateTimeFormat("en-US", { timeZone: tz });
+        return true;
+      } catch {
+        return false;
+      }
+    }, "OFFICE_TIME_ZONE is not a known IANA time zone (e.g. America/Chicago)"),
+  /** Minutes an open trigger may wait for an acknowledgement before each escalation level. */
+  ESCALATION_MINUTES: z.coerce.number().positive().max(24 * 60).default(15),
+  NOTIFY_MAX_ATTEMPTS: z.coerce.number().int().min(1).max(50).default(6),
+  /** First retry delay; each later one doubles, up to the maximum. Fractions allowed (tests). */
+  NOTIFY_RETRY_BASE_SECONDS: z.coerce.number().positive().max(3600).default(30),
+  NOTIFY_RETRY_MAX_SECONDS: z.coerce.number().positive().max(86_400).default(1800),
+  NOTIFY_CONCURRENCY: z.coerce.number().int().min(1).max(32).default(4),
+  MAIL_PER_MINUTE: z.coerce.number().int().min(1).max(100_000).default(60),
+  SMS_PER_MINUTE: z.coerce.number().int().min(1).max(100_000).default(30),
+  /** How often the dispatcher looks for due outbox rows. */
+  NOTIFY_POLL_SECONDS: z.coerce.number().positive().max(600).default(5),
+  /** Run the outbox dispatcher in this process. */
+  NOTIFY_DISPATCH: boolFromEnv.default(true),
 });
 
 export type AppConfig = z.infer<typeof configSchema> & { dataDir: string; databaseFile: string; inboxDir: string };
