@@ -17,6 +17,8 @@ import { toDisplayValue, type MapField, type MapFieldGroup } from "./map-fields.
  */
 
 export const RAMP_STEPS = 256;
+/** About this many round-number ticks on a ramp's legend; the ramp's ends are rounded to the same steps. */
+const LEGEND_TICKS = 6;
 
 export interface RampScale {
   kind: "sequential" | "diverging";
@@ -89,35 +91,40 @@ export interface ValueRange {
 
 /**
  * The ramp's ends, chosen in display units so the legend reads in round numbers (knots, not m/s),
- * then carried back to storage units. Diverging ramps are symmetric about zero.
+ * then carried back to storage units. Diverging ramps are symmetric about zero, or end at zero for
+ * a field that cannot be positive.
  */
 function rampDomain(field: MapField, range: ValueRange, isDiverging: boolean): { storage: [number, number]; display: [number, number] } {
   const scale = field.display.scale || 1;
   const toStorage = (display: number) => (display - field.display.offset) / scale;
-  const min = range.min ?? 0;
-  const max = range.max ?? min;
+  const min = range.min !== null && Number.isFinite(range.min) ? range.min : 0;
+  const max = range.max !== null && Number.isFinite(range.max) ? range.max : min;
   let lo = toDisplayValue(field, min);
   let hi = toDisplayValue(field, max);
   if (isDiverging) {
     const centre = toDisplayValue(field, 0);
     const reach = Math.max(Math.abs(lo - centre), Math.abs(hi - centre)) || 1;
-    const niced = scaleLinear().domain([0, reach]).nice().domain()[1]!;
+    // Half the legend's tick count per side, so both ends of a symmetric ramp land on a tick.
+    const niced = scaleLinear().domain([0, reach]).nice(field.neverPositive ? LEGEND_TICKS : LEGEND_TICKS / 2).domain()[1]!;
     lo = centre - niced;
-    hi = centre + niced;
+    hi = field.neverPositive ? centre : centre + niced;
   } else {
     if (!(hi > lo)) hi = lo + 1;
-    [lo, hi] = scaleLinear().domain([lo, hi]).nice().domain() as [number, number];
+    [lo, hi] = scaleLinear().domain([lo, hi]).nice(LEGEND_TICKS).domain() as [number, number];
   }
   return { storage: [toStorage(lo), toStorage(hi)], display: [lo, hi] };
 }
 
+/** The negative half of the diverging ramp, for fields that are never above zero: zero keeps the ramp's neutral middle. */
+const divergingNegativeHalf = (t: number) => diverging(t / 2);
+
 function rampScale(field: MapField, range: ValueRange): RampScale {
   const kind = field.signed ? "diverging" : "sequential";
-  const interpolator = kind === "diverging" ? diverging : SEQUENTIAL_BY_GROUP[field.group];
+  const interpolator = kind === "sequential" ? SEQUENTIAL_BY_GROUP[field.group] : field.neverPositive ? divergingNegativeHalf : diverging;
   const { storage, display } = rampDomain(field, range, kind === "diverging");
   const ticks = scaleLinear()
     .domain(display)
-    .ticks(6)
+    .ticks(LEGEND_TICKS)
     .map((value) => ({ display: value, at: (value - display[0]) / (display[1] - display[0]) }));
   return { kind, domain: storage, interpolator, lut: sampleRamp(interpolator), ticks };
 }

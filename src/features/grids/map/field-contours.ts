@@ -50,18 +50,22 @@ export function traceContours(values: Float32Array, nx: number, ny: number, leve
   });
 }
 
-/** True for a segment that runs along the grid's outer edge, where d3-contour closes its rings. */
-function onEdge(x0: number, y0: number, x1: number, y1: number, nx: number, ny: number): boolean {
-  return (x0 === x1 && (x0 <= 0 || x0 >= nx)) || (y0 === y1 && (y0 <= 0 || y0 >= ny));
+/**
+ * True for a point on the grid's outer border. d3-contour treats the world outside the grid as
+ * below every level, so a region reaching the edge gets its ring closed along the border; those
+ * points are never a real crossing of the level (real ones lie between two cell centres).
+ */
+function onBorder(x: number, y: number, nx: number, ny: number): boolean {
+  return x <= 0 || x >= nx || y <= 0 || y >= ny;
 }
 
-/** Adds a ring as one or more lines, leaving out the stretches that only close it along the edge. */
+/** Adds a ring as one or more lines, leaving out the stretches that only close it along the border. */
 function appendRing(ring: number[][], nx: number, ny: number, points: number[], starts: number[]): void {
   let open = false;
   for (let k = 1; k < ring.length; k++) {
     const [x0, y0] = ring[k - 1]!;
     const [x1, y1] = ring[k]!;
-    if (onEdge(x0!, y0!, x1!, y1!, nx, ny)) {
+    if (onBorder(x0!, y0!, nx, ny) || onBorder(x1!, y1!, nx, ny)) {
       open = false;
       continue;
     }

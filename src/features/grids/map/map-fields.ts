@@ -17,6 +17,8 @@ export interface MapField {
   display: DisplayUnit;
   /** Negative values mean something of their own (inhibition, convergence, a westward component). */
   signed: boolean;
+  /** Signed, but never above zero (inhibition): only the negative half of a diverging ramp is needed. */
+  neverPositive: boolean;
   categories: readonly FieldCategory[];
 }
 
@@ -50,14 +52,15 @@ export function describeMapField(info: Pick<FieldInfoDto, "key" | "unit">): MapF
       display: catalogued.display,
       // The catalogue's QC range says whether a field can go below zero.
       signed: catalogued.kind === "number" && catalogued.range[0] < 0,
+      neverPositive: catalogued.kind === "number" && catalogued.range[0] < 0 && catalogued.range[1] <= 0,
       categories: catalogued.categories ?? [],
     };
   }
   const input = storedInputByKey(info.key);
   if (input) {
-    return { key: input.key, label: `${input.key} · ${input.label}`, meaning: `Model ${input.label}, as read from the file.`, group: "model", kind: "number", display: input.display, signed: input.signed, categories: [] };
+    return { key: input.key, label: `${input.key} · ${input.label}`, meaning: `Model ${input.label}, as read from the file.`, group: "model", kind: "number", display: input.display, signed: input.signed, neverPositive: false, categories: [] };
   }
-  return { key: info.key, label: info.key, meaning: "A stored field without a catalogue entry; shown in its stored unit.", group: "other", kind: "number", display: AS_STORED(info.unit), signed: false, categories: [] };
+  return { key: info.key, label: info.key, meaning: "A stored field without a catalogue entry; shown in its stored unit.", group: "other", kind: "number", display: AS_STORED(info.unit), signed: false, neverPositive: false, categories: [] };
 }
 
 export interface MapFieldGroupList {

@@ -27,7 +27,7 @@ function RampLegend({ field, scale }: { field: MapField; scale: RampScale }) {
         ))}
       </div>
       <p className="mt-0.5 text-xs text-muted">
-        {scale.kind === "diverging" ? "Diverging scale centred on zero" : "Sequential scale"}
+        {scale.kind === "sequential" ? "Sequential scale" : field.neverPositive ? "Diverging scale, negative half (zero is neutral)" : "Diverging scale centred on zero"}
         {field.display.unit ? <>, in <span className="font-medium text-ink">{field.display.unit}</span></> : ", no unit"}. Values past either end take the end colour.
       </p>
     </div>
