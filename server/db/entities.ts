@@ -19,6 +19,7 @@ import { OnCallShiftEntity } from "../entities/on-call-shift.entity.ts";
 import { NotificationEntity } from "../entities/notification.entity.ts";
 import { DeliveryAttemptEntity } from "../entities/delivery-attempt.entity.ts";
 import { NotifySettingEntity } from "../entities/notify-setting.entity.ts";
+import { StormReportEntity } from "../entities/storm-report.entity.ts";
 
 /** Every entity the data source knows; add new ones here. */
 export const ENTITIES = [
@@ -43,4 +44,5 @@ export const ENTITIES = [
   NotificationEntity,
   DeliveryAttemptEntity,
   NotifySettingEntity,
+  StormReportEntity,
 ];
