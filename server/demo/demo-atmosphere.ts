@@ -105,13 +105,13 @@ export function demoFrameFields(geometry: LambertGeometry, hour: number): DemoFr
       const Y = ((j - (geometry.ny - 1) / 2) * geometry.dy) / 1000;
 
       // Surface: the dryline, moisture fading to the north, terrain rising to the west.
-      const drylineX = -260 + 24 * hour + 0.15 * Y;
+      const drylineX = -190 + 20 * hour + 0.15 * Y;
       const moist = smoothStep((X - drylineX) / 30) * (1 - smoothStep((Y - 340) / 80));
       const zs = clamp(650 - 0.45 * X, 250, 1300);
       const t2 = 300.5 + 3 * (1 - moist) + 2 * Math.sin((Math.PI * clamp(hour, 0, 8)) / 12) - 0.006 * Y;
       const td2 = Math.min(t2 - 1, moist * (293.8 - 0.004 * Y) + (1 - moist) * 271);
       const mixedTop = moist * 1300 + (1 - moist) * 2900;
-      const cap = moist * Math.max(0, 2.4 - 0.28 * hour);
+      const cap = moist * Math.max(0, 7.5 - 1.1 * hour);
 
       // Environmental temperature and dewpoint by height above ground.
       for (let k = 0; k <= steps; k++) {
@@ -139,7 +139,7 @@ export function demoFrameFields(geometry: LambertGeometry, hour: number): DemoFr
       }
 
       // Winds: veering with height, a low-level jet in the moist sector, the jet streak aloft.
-      const lljSpeed = 15 + 1.3 * hour;
+      const lljSpeed = 8 + 2.2 * hour;
       const windHeights = [0, 900, 3000, 6000, JET_LEVEL_M - zs, 14_000 - zs, 17_000 - zs];
       const uNodes = [moist * -1 + (1 - moist) * 7, moist * 4 + (1 - moist) * 10, 12, 22, 24, 18, 10];
       const vNodes = [moist * 9 + (1 - moist) * 6, moist * lljSpeed + (1 - moist) * 8, 12, 10, 6, 4, 0];

@@ -12,7 +12,7 @@ export function demoRules(zoneIds: readonly number[]): CreateRuleInput[] {
     {
       name: "Supercell ingredients",
       description: "Deep-layer shear strong enough for rotating storms over moderate buoyancy with a weak cap.",
-      expression: "mlcape >= 1000 and shear_0_6km >= 20 and mlcin > -100",
+      expression: "mlcape >= 1000 and shear_0_6km >= 20 and mlcin > -50",
       zoneIds: [...zoneIds],
       severity: "serious",
       spatialCondition: { kind: "min-coverage", percent: 10 },
