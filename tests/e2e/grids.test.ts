@@ -103,7 +103,25 @@ describe("grids and the map in a real browser", () => {
     await screenshot(page, "grids-ready");
   });
 
+  it("shows why a broken file failed, and refuses a file that is not a grid at all", async () => {
+    // The first 400 bytes of a real demo file: it starts like GRIB2, so it becomes a job, and then fails.
+    const truncated = fs.readFileSync(demoFiles[0]!).subarray(0, 400);
+    await page.getByLabel("Upload grid files…").setInputFiles({ name: "cut-short.grib2", mimeType: "application/octet-stream", buffer: truncated });
+    const row = panel(page, "Ingest jobs").locator("tr", { hasText: "cut-short.grib2" });
+    await row.getByText("Failed", { exact: true }).waitFor({ timeout: 60_000 });
+    // The decoder's own words reach the page: the message declares more bytes than the file holds.
+    await expect.poll(() => row.textContent()).toMatch(/truncated: the message declares \d+ bytes but only \d+ remain/);
+
+    await page.getByLabel("Upload grid files…").setInputFiles({ name: "notes.txt", mimeType: "text/plain", buffer: Buffer.from("shift notes, not a grid") });
+    await page.getByText("notes.txt was not accepted").waitFor();
+    expect(await panel(page, "Ingest jobs").locator("tr", { hasText: "notes.txt" }).count()).toBe(0);
+    await screenshot(page, "grids-failed-job");
+  });
+
   it("draws MLCAPE with its legend, reads values under the pointer and steps valid times", async () => {
+    // Clear the upload notes so the map screenshots show the map.
+    const dismiss = page.getByRole("button", { name: /^Dismiss:/ });
+    while ((await dismiss.count()) > 0) await dismiss.first().click();
     await page.getByRole("link", { name: /Open F01 of the 2026-05-14 12Z/ }).click();
     await page.waitForURL(/\/grids\/frames\/\d+/);
     const firstFrameUrl = page.url();
@@ -161,6 +179,8 @@ describe("grids and the map in a real browser", () => {
     expect(Number(url.searchParams.get("lat"))).toBeCloseTo(Number(latText), 1);
     expect(Number(url.searchParams.get("lon"))).toBeCloseTo(-Number(lonText), 1);
     await page.getByRole("heading", { name: "Soundings", level: 1 }).waitFor();
+    // The Soundings page reads that model column and names it.
+    await page.getByRole("heading", { name: "Bellwether demo model (invented) column, forecast hour 1", level: 2 }).waitFor();
     await screenshot(page, "map-click-sounding");
     expect(pageErrors).toEqual([]);
   });

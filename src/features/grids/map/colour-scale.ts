@@ -161,6 +161,12 @@ export function chooseColourScale(field: MapField, range: ValueRange): ColourSca
   return rampScale(field, range);
 }
 
+/** Enough decimals to tell neighbouring ticks apart, and no more (ticks 0, 0.5, 1 → 1; 0, 1000 → 0). */
+export function tickDecimals(ticks: ReadonlyArray<{ display: number }>): number {
+  const step = ticks.length > 1 ? Math.abs(ticks[1]!.display - ticks[0]!.display) : 1;
+  return step > 0 ? Math.max(0, Math.min(4, -Math.floor(Math.log10(step) + 1e-9))) : 0;
+}
+
 /** The union of several ranges (the frames of one run), ignoring frames with no values. */
 export function unionRange(ranges: readonly ValueRange[]): ValueRange {
   let min: number | null = null;

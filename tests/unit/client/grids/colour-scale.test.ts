@@ -1,6 +1,6 @@
 import { describe, expect, it } from "vitest";
 import { interpolateInferno, interpolateRdBu } from "d3-scale-chromatic";
-import { chooseColourScale, parseColour, RAMP_STEPS, unionRange, type RampScale } from "../../../../src/features/grids/map/colour-scale.ts";
+import { chooseColourScale, parseColour, RAMP_STEPS, tickDecimals, unionRange, type RampScale } from "../../../../src/features/grids/map/colour-scale.ts";
 import { describeMapField } from "../../../../src/features/grids/map/map-fields.ts";
 
 const field = (key: string, unit = "1") => describeMapField({ key, unit });
@@ -100,5 +100,17 @@ describe("helpers", () => {
   it("joins the ranges of a run's frames, skipping frames without values", () => {
     expect(unionRange([{ min: 10, max: 200 }, { min: null, max: null }, { min: 0, max: 150 }])).toEqual({ min: 0, max: 200 });
     expect(unionRange([])).toEqual({ min: null, max: null });
+  });
+});
+
+describe("tickDecimals", () => {
+  it("shows as many decimals as the tick step needs", () => {
+    const ticks = (...values: number[]) => values.map((display) => ({ display }));
+    // Derived in closed form from the step between ticks.
+    expect(tickDecimals(ticks(0, 1000, 2000))).toBe(0);
+    expect(tickDecimals(ticks(26, 27, 28))).toBe(0);
+    expect(tickDecimals(ticks(0, 0.5, 1))).toBe(1);
+    expect(tickDecimals(ticks(-0.02, 0, 0.02))).toBe(2);
+    expect(tickDecimals(ticks(5))).toBe(0);
   });
 });

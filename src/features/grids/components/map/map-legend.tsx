@@ -1,17 +1,11 @@
 import { formatNumber } from "@/lib/format-units.ts";
-import type { CategoricalScale, ColourScale, RampScale } from "../../map/colour-scale.ts";
+import { tickDecimals, type CategoricalScale, type ColourScale, type RampScale } from "../../map/colour-scale.ts";
 import type { MapField } from "../../map/map-fields.ts";
-
-/** Enough digits to tell neighbouring ticks apart, and no more. */
-function tickDecimals(scale: RampScale): number {
-  const values = scale.ticks.map((tick) => tick.display);
-  const step = values.length > 1 ? Math.abs(values[1]! - values[0]!) : 1;
-  return step > 0 ? Math.max(0, Math.min(4, -Math.floor(Math.log10(step) + 1e-9))) : 0;
-}
+import { MAP_GROUND } from "./map-stage.tsx";
 
 function RampLegend({ field, scale }: { field: MapField; scale: RampScale }) {
   const stops = Array.from({ length: 16 }, (_, k) => `${scale.interpolator(k / 15)} ${((k / 15) * 100).toFixed(1)}%`).join(", ");
-  const decimals = tickDecimals(scale);
+  const decimals = tickDecimals(scale.ticks);
   return (
     <div>
       <div className="h-3 rounded-sm border border-line" style={{ background: `linear-gradient(to right, ${stops})` }} />
@@ -63,7 +57,7 @@ export function MapLegend({ field, scale, missingCount }: { field: MapField; sca
       {scale.kind === "categorical" ? <CategoryLegend scale={scale} /> : <RampLegend field={field} scale={scale} />}
       {missingCount > 0 && (
         <p className="flex items-center gap-1.5 text-xs text-muted">
-          <span aria-hidden="true" className="inline-block h-3 w-3 rounded-sm border border-line bg-canvas" />
+          <span aria-hidden="true" className="inline-block h-3 w-3 rounded-sm border border-line" style={{ background: MAP_GROUND }} />
           No value at {formatNumber(missingCount)} grid points (left clear)
         </p>
       )}

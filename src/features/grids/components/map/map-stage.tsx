@@ -14,6 +14,9 @@ export interface MapViewport {
 
 const MapViewportContext = createContext<MapViewport | null>(null);
 
+/** Where the field has no value, the map shows this dark ground. */
+export const MAP_GROUND = "#0b0e12";
+
 /** The viewport of the map this layer sits in. */
 export function useMapViewport(): MapViewport {
   const viewport = useContext(MapViewportContext);
@@ -49,7 +52,8 @@ export function MapStage({ geometry, maxHeight, children }: { geometry: GridGeom
   return (
     <div ref={ref} className="w-full">
       {width > 0 && (
-        <div className="relative mx-auto overflow-hidden rounded border border-line bg-canvas" style={{ width: transform.width, height: transform.height }}>
+        // The map keeps a dark ground in both themes so the light outlines and contours read everywhere.
+        <div className="relative mx-auto overflow-hidden rounded border border-line" style={{ width: transform.width, height: transform.height, background: MAP_GROUND }}>
           <MapViewportContext.Provider value={viewport}>{children}</MapViewportContext.Provider>
         </div>
       )}
