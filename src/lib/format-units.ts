@@ -51,3 +51,25 @@ export function formatHectopascals(pressure: number | null | undefined, fraction
   if (pressure === null || pressure === undefined || !Number.isFinite(pressure)) return "—";
   return formatNumber(pressure / 100, fractionDigits);
 }
+
+const SUPERSCRIPT: Record<string, string> = { "-": "⁻", "0": "⁰", "1": "¹", "2": "²", "3": "³", "4": "⁴", "5": "⁵", "6": "⁶", "7": "⁷", "8": "⁸", "9": "⁹" };
+const superscript = (exponent: string): string => [...exponent].map((c) => SUPERSCRIPT[c] ?? c).join("");
+
+/**
+ * A catalogue storage unit written the way people read it: "m s-1" → "m/s", "m2 s-2" → "m²/s²",
+ * "s-1" → "s⁻¹", "K (100 km)-1 (3 h)-1" → "K/100km/3h", "1" → "" (dimensionless).
+ */
+export function formatStorageUnit(unit: string): string {
+  if (unit === "1" || unit.trim() === "") return "";
+  const factors: Array<{ base: string; exponent: number }> = [];
+  for (const part of unit.match(/\([^)]*\)-?\d*|\S+/g) ?? []) {
+    const match = /^(\([^)]*\)|[^\d-]+)(-?\d*)$/.exec(part);
+    if (!match) return unit;
+    factors.push({ base: match[1]!.replace(/[()\s]/g, ""), exponent: match[2] === "" ? 1 : Number(match[2]) });
+  }
+  const power = (base: string, exponent: number) => (exponent === 1 ? base : `${base}${superscript(String(exponent))}`);
+  const numerator = factors.filter((f) => f.exponent > 0).map((f) => power(f.base, f.exponent));
+  // With nothing above the line, negative powers read better than "1/s".
+  if (numerator.length === 0) return factors.map((f) => power(f.base, f.exponent)).join(" ");
+  return [numerator.join(" "), ...factors.filter((f) => f.exponent < 0).map((f) => power(f.base, -f.exponent))].join("/");
+}
