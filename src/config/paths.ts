@@ -6,7 +6,17 @@ export const paths = {
   grids: "/grids",
   accounts: "/admin/accounts",
   audit: "/audit",
+  rules: "/rules",
+  zones: "/zones",
 } as const;
+
+/** The pages of one rule: the editor (read-only for roles that cannot edit), its history and its backtest. */
+export const rulePaths = {
+  create: () => `${paths.rules}/new`,
+  detail: (ruleId: number) => `${paths.rules}/${ruleId}`,
+  history: (ruleId: number) => `${paths.rules}/${ruleId}/history`,
+  backtest: (ruleId: number) => `${paths.rules}/${ruleId}/backtest`,
+};
 
 /**
  * The Soundings page showing the model column nearest a map point of one frame (the map viewer links here).
