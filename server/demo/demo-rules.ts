@@ -6,74 +6,52 @@ import type { CreateRuleInput } from "../../shared/api/rules.ts";
  * steep mid-level lapse rates). The office is invented; these are examples to tune, not guidance.
  */
 export function demoRules(zoneIds: readonly number[]): CreateRuleInput[] {
-  const recipients = { onCall: true, contactIds: [], groupIds: [] };
-  const anyTime = { kind: "any-time" as const };
+  const rule = (fields: Pick<CreateRuleInput, "name" | "description" | "expression" | "severity" | "spatialCondition"> & Partial<CreateRuleInput>): CreateRuleInput => ({
+    zoneIds: [...zoneIds],
+    validTimeWindow: { kind: "any-time" },
+    persistenceFrames: 1,
+    coolDownHours: 6,
+    recipients: { onCall: true, contactIds: [], groupIds: [] },
+    enabled: true,
+    ...fields,
+  });
   return [
-    {
+    rule({
       name: "Supercell ingredients",
       description: "Deep-layer shear strong enough for rotating storms over moderate buoyancy with a weak cap.",
       expression: "mlcape >= 1000 and shear_0_6km >= 20 and mlcin > -50",
-      zoneIds: [...zoneIds],
       severity: "serious",
       spatialCondition: { kind: "min-coverage", percent: 10 },
-      validTimeWindow: anyTime,
-      persistenceFrames: 1,
-      coolDownHours: 6,
-      recipients,
-      enabled: true,
-    },
-    {
+    }),
+    rule({
       name: "Tornado-favourable low levels",
       description: "Effective-layer STP of 1 or more with strong 0–1 km helicity and a low cloud base, for two straight forecast hours.",
       expression: "stp_eff >= 1 and srh_0_1km >= 100 and mllcl_hgt < 1500",
-      zoneIds: [...zoneIds],
       severity: "urgent",
       spatialCondition: { kind: "min-points", points: 3 },
-      validTimeWindow: anyTime,
       persistenceFrames: 2,
-      coolDownHours: 6,
-      recipients,
-      enabled: true,
-    },
-    {
+    }),
+    rule({
       name: "Steep lapse rates over rich moisture",
       description: "An elevated mixed layer over a moist boundary layer: large hail potential once storms form.",
       expression: "lapse_700_500 >= 7.5 and pwat >= 25",
-      zoneIds: [...zoneIds],
       severity: "heads-up",
       spatialCondition: { kind: "min-coverage", percent: 25 },
-      validTimeWindow: anyTime,
-      persistenceFrames: 1,
-      coolDownHours: 6,
-      recipients,
-      enabled: true,
-    },
-    {
+    }),
+    rule({
       name: "Jet streak lift over instability",
       description:
         "Where the upper jet streak favours divergence aloft (left exit or right entrance of a straight streak, adjusted for curvature) over buoyant, sheared air.",
       expression: "jet_div_favoured == 1 and mucape >= 1000 and shear_0_6km >= 18",
-      zoneIds: [...zoneIds],
       severity: "serious",
       spatialCondition: { kind: "min-coverage", percent: 15 },
-      validTimeWindow: anyTime,
-      persistenceFrames: 1,
-      coolDownHours: 6,
-      recipients,
-      enabled: true,
-    },
-    {
+    }),
+    rule({
       name: "Capped but loaded",
       description: "Large buoyancy held under a strong cap: quiet until the cap breaks.",
       expression: "mlcape >= 2500 and mlcin <= -100",
-      zoneIds: [...zoneIds],
       severity: "heads-up",
       spatialCondition: { kind: "min-points", points: 5 },
-      validTimeWindow: anyTime,
-      persistenceFrames: 1,
-      coolDownHours: 6,
-      recipients,
-      enabled: true,
-    },
+    }),
   ];
 }

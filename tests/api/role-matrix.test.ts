@@ -4,6 +4,7 @@ import { ROLES, PERMISSIONS, type Role } from "../../shared/auth/permissions.ts"
 import { startTestServer, signIn, anonymous, ingestBytes, insertOpenTrigger, DEMO_USER_FOR_ROLE, type SignedInAgent, type TestServer } from "../helpers/test-server.ts";
 import { fakeGribBytes, syntheticRecords } from "../helpers/synthetic-grid.ts";
 import { SYSTEM_ACTOR } from "../../server/audit/audit-log.ts";
+import { testRule } from "../helpers/rule-builder.ts";
 import type { HttpMethod, RouteEntry } from "../../server/http/route-table.ts";
 
 /**
@@ -24,20 +25,7 @@ interface Example {
 }
 
 let counter = 0;
-const RULE = (over: Record<string, unknown> = {}) => ({
-  name: "Matrix rule",
-  description: "",
-  expression: "shear_0_6km >= 10",
-  zoneIds: [1],
-  severity: "serious",
-  spatialCondition: { kind: "any-point" },
-  validTimeWindow: { kind: "any-time" },
-  persistenceFrames: 1,
-  coolDownHours: 6,
-  recipients: { onCall: true, contactIds: [], groupIds: [] },
-  enabled: true,
-  ...over,
-});
+const RULE = (over: Record<string, unknown> = {}) => testRule([1], { name: "Matrix rule", description: "", ...over });
 const SQUARE = { type: "Polygon", coordinates: [[[-99, 35], [-98, 35], [-98, 36], [-99, 36], [-99, 35]]] };
 const SOUNDING = fs.readFileSync("tests/fixtures/soundings/demo-warm-sector.csv", "utf8");
 const EXAMPLES: Record<string, Example> = {

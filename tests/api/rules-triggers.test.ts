@@ -4,6 +4,7 @@ import { fakeGribBytes, syntheticRecords } from "../helpers/synthetic-grid.ts";
 import { TriggerEntity } from "../../server/entities/trigger.entity.ts";
 import { RuleEvaluationEntity } from "../../server/entities/rule-evaluation.entity.ts";
 import { decodeMaskBits } from "../../shared/grid/mask-bits.ts";
+import { testRule } from "../helpers/rule-builder.ts";
 
 /**
  * The alerting engine end to end with made-up grids: the bytes of each "file" name its run, valid
@@ -24,20 +25,7 @@ let forecaster: SignedInAgent;
 let zoneId: number;
 let ruleId: number;
 
-const rule = (over: Record<string, unknown> = {}) => ({
-  name: "Strong deep shear",
-  description: "Test rule",
-  expression: "shear_0_6km >= 10",
-  zoneIds: [zoneId],
-  severity: "serious",
-  spatialCondition: { kind: "min-coverage", percent: 50 },
-  validTimeWindow: { kind: "any-time" },
-  persistenceFrames: 1,
-  coolDownHours: 6,
-  recipients: { onCall: true, contactIds: [], groupIds: [] },
-  enabled: true,
-  ...over,
-});
+const rule = (over: Record<string, unknown> = {}) => testRule([zoneId], { spatialCondition: { kind: "min-coverage", percent: 50 }, ...over });
 
 async function settle() {
   await server.services.ingest.idle();

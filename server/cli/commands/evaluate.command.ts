@@ -6,7 +6,7 @@ import { allocateColumnGridOutput } from "../../../shared/meteo/column/column-gr
 import { diagnoseColumnGrid } from "../../../shared/meteo/column/diagnose-grid.ts";
 import { compileRule, evaluateSpatialCondition, parseRule, summariseMatches, type SpatialCondition } from "../../../shared/rules/index.ts";
 import type { FieldKey } from "../../../shared/fields.ts";
-import { detectGridFormat, describeUnknownFormat } from "../../ingest/detect-format.ts";
+import { readGridFile } from "../read-grid-file.ts";
 import { decodeGridFile } from "../../ingest/decode-file.ts";
 import { assembleFrames } from "../../ingest/assemble-frames.ts";
 import { frameExtraDiagnosers } from "../../ingest/frame-diagnostics.ts";
@@ -71,14 +71,7 @@ export const evaluateCommand: CliCommand = {
     const zones = readZones(typeof zonesFlag === "string" ? zonesFlag : undefined);
     if (condition.kind === "zone-extreme") throw new CliUsageError("Zone-extreme conditions are set in the rule editor.");
 
-    let bytes: Uint8Array;
-    try {
-      bytes = new Uint8Array(fs.readFileSync(file));
-    } catch (err) {
-      throw new CliUsageError(`Cannot read ${file}: ${err instanceof Error ? err.message : String(err)}`);
-    }
-    const format = detectGridFormat(bytes.subarray(0, 16));
-    if (!format) throw new CliUsageError(`${file}: ${describeUnknownFormat(bytes.subarray(0, 16))}`);
+    const { bytes, format } = readGridFile(file);
     const { frames } = assembleFrames(await decodeGridFile(bytes, format));
     const rule = compileRule(parsed.rule);
     const keys = [...parsed.rule.fieldKeys] as FieldKey[];

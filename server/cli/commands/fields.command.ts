@@ -1,4 +1,3 @@
-import fs from "node:fs";
 import { FIELDS } from "../../../shared/fields.ts";
 import { gridCoordinates, nearestGridPoint } from "../../../shared/grid/grid-coordinates.ts";
 import { allocateColumnGridOutput } from "../../../shared/meteo/column/column-grid.ts";
@@ -6,6 +5,7 @@ import { diagnoseColumnGrid } from "../../../shared/meteo/column/diagnose-grid.t
 import { detectGridFormat, describeUnknownFormat } from "../../ingest/detect-format.ts";
 import { decodeGridFile } from "../../ingest/decode-file.ts";
 import { assembleFrames } from "../../ingest/assemble-frames.ts";
+import { readGridFile } from "../read-grid-file.ts";
 import { frameExtraDiagnosers } from "../../ingest/frame-diagnostics.ts";
 import { CliUsageError, parseCliArgs, type CliCommand } from "../command.ts";
 import { parseLatLon } from "../lat-lon.ts";
@@ -62,12 +62,7 @@ export const fieldsCommand: CliCommand = {
     const at = parseLatLon(flags.get("at"));
     const timeFlag = flags.get("time");
     if (timeFlag !== undefined && (typeof timeFlag !== "string" || Number.isNaN(Date.parse(timeFlag)))) throw new CliUsageError(`--time: "${String(timeFlag)}" is not an ISO time`);
-    let bytes: Uint8Array;
-    try {
-      bytes = new Uint8Array(fs.readFileSync(file));
-    } catch (err) {
-      throw new CliUsageError(`Cannot read ${file}: ${err instanceof Error ? err.message : String(err)}`);
-    }
+    const { bytes } = readGridFile(file);
     const frames = await fieldsAtPoint(bytes, at, typeof timeFlag === "string" ? timeFlag : null);
     if (flags.has("json")) {
       process.stdout.write(`${JSON.stringify({ frames })}\n`);

@@ -1,7 +1,6 @@
-import fs from "node:fs";
 import { nearestGridPoint, gridCoordinates } from "../../../shared/grid/grid-coordinates.ts";
 import type { GridGeometry } from "../../../shared/grid/geometry-types.ts";
-import { detectGridFormat, describeUnknownFormat } from "../../ingest/detect-format.ts";
+import { readGridFile } from "../read-grid-file.ts";
 import { decodeGrib2, loadGrib2Codecs } from "../../ingest/grib2/index.ts";
 import { decodeNetcdfForInspect } from "../../ingest/netcdf-inspect.ts";
 import { CliUsageError, parseCliArgs, type CliCommand } from "../command.ts";
@@ -57,14 +56,7 @@ export function inspectFields(fields: readonly InspectableField[], at: { lat: nu
 }
 
 export async function readInspectable(file: string): Promise<{ format: "grib2" | "netcdf"; fields: InspectableField[] }> {
-  let bytes: Uint8Array;
-  try {
-    bytes = new Uint8Array(fs.readFileSync(file));
-  } catch (err) {
-    throw new CliUsageError(`Cannot read ${file}: ${err instanceof Error ? err.message : String(err)}`);
-  }
-  const format = detectGridFormat(bytes.subarray(0, 16));
-  if (!format) throw new CliUsageError(`${file}: ${describeUnknownFormat(bytes.subarray(0, 16))}`);
+  const { bytes, format } = readGridFile(file);
   if (format === "grib2") {
     await loadGrib2Codecs();
     const messages = decodeGrib2(bytes);
