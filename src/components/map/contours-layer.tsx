@@ -1,10 +1,10 @@
 import { useCallback, useMemo } from "react";
 import { formatNumber } from "@/lib/format-units.ts";
-import { tickDecimals, type RampScale } from "../../map/colour-scale.ts";
-import { contourLevels, traceContours, type ContourLevel } from "../../map/field-contours.ts";
-import { gridToCanvas, type GridCanvasTransform } from "../../map/grid-canvas-transform.ts";
-import type { MapField } from "../../map/map-fields.ts";
-import type { FieldValues } from "../../api/get-field-values.ts";
+import { tickDecimals, type RampScale } from "./colour-scale.ts";
+import { contourLevels, traceContours, type ContourLevel } from "./field-contours.ts";
+import { gridToCanvas, type GridCanvasTransform } from "./grid-canvas-transform.ts";
+import type { MapField } from "./map-fields.ts";
+import type { FieldValues } from "./field-values.ts";
 import { LayerCanvas, type DrawLayer } from "./layer-canvas.tsx";
 import { tracePolylines } from "./stroke-polylines.ts";
 

@@ -1,5 +1,5 @@
 import { useId } from "react";
-import type { MapField, MapFieldGroupList } from "../../map/map-fields.ts";
+import type { MapField, MapFieldGroupList } from "./map-fields.ts";
 
 /** The field to draw, grouped by theme, with the chosen field's plain meaning underneath. */
 export function FieldPicker({ groups, value, onChange }: { groups: readonly MapFieldGroupList[]; value: string; onChange: (key: string) => void }) {

@@ -1,7 +1,7 @@
 import { useCallback, useMemo } from "react";
-import type { ColourScale } from "../../map/colour-scale.ts";
-import { paintField } from "../../map/paint-field.ts";
-import type { FieldValues } from "../../api/get-field-values.ts";
+import type { ColourScale } from "./colour-scale.ts";
+import { paintField } from "./paint-field.ts";
+import type { FieldValues } from "./field-values.ts";
 import { LayerCanvas, type DrawLayer } from "./layer-canvas.tsx";
 
 /** The field itself, one image pixel per grid cell, painted once per field and scale. */

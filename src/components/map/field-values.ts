@@ -1,6 +1,6 @@
 import { queryOptions, useQuery } from "@tanstack/react-query";
 import { api, ApiError } from "@/lib/api-client.ts";
-import { gridKeys } from "./grid-keys.ts";
+import { mapKeys } from "./map-keys.ts";
 
 /** One stored field: values in the canonical layout (index = j * nx + i), NaN where there is none. */
 export interface FieldValues {
@@ -33,7 +33,7 @@ export async function getFieldValues(frameId: number, key: string, grid: { nx: n
 
 export const fieldValuesQuery = (frameId: number, key: string, grid: { nx: number; ny: number }) =>
   queryOptions({
-    queryKey: gridKeys.field(frameId, key),
+    queryKey: mapKeys.field(frameId, key),
     queryFn: ({ signal }) => getFieldValues(frameId, key, grid, signal),
     staleTime: Infinity,
     gcTime: 2 * 60_000,

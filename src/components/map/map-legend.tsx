@@ -1,6 +1,6 @@
 import { formatNumber } from "@/lib/format-units.ts";
-import { tickDecimals, type CategoricalScale, type ColourScale, type RampScale } from "../../map/colour-scale.ts";
-import type { MapField } from "../../map/map-fields.ts";
+import { tickDecimals, type CategoricalScale, type ColourScale, type RampScale } from "./colour-scale.ts";
+import type { MapField } from "./map-fields.ts";
 import { MAP_GROUND } from "./map-stage.tsx";
 
 function RampLegend({ field, scale }: { field: MapField; scale: RampScale }) {

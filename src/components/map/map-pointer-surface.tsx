@@ -1,6 +1,6 @@
 import { useState, type KeyboardEvent, type MouseEvent } from "react";
 import type { GeoPoint } from "@shared/grid/projection.ts";
-import { cellAtCanvas } from "../../map/grid-canvas-transform.ts";
+import { cellAtCanvas } from "./grid-canvas-transform.ts";
 import { useMapViewport } from "./map-stage.tsx";
 
 /** A grid cell under the pointer or keyboard cursor, with the latitude/longitude of its centre. */

@@ -1,6 +1,6 @@
-import type { FieldValues } from "../../api/get-field-values.ts";
-import { formatLatLon } from "../../format-grid-labels.ts";
-import { formatMapValue, type MapField } from "../../map/map-fields.ts";
+import type { FieldValues } from "./field-values.ts";
+import { formatLatLon } from "./format-lat-lon.ts";
+import { formatMapValue, type MapField } from "./map-fields.ts";
 import type { MapPoint } from "./map-pointer-surface.tsx";
 
 /** The value under the pointer in display units, where it is, and which grid point it belongs to. */

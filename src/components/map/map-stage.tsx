@@ -1,7 +1,7 @@
 import { createContext, useContext, useEffect, useMemo, useRef, useState, type ReactNode } from "react";
 import type { GridGeometry } from "@shared/grid/geometry-types.ts";
 import { projectionForGeometry, type GridProjection } from "@shared/grid/projection.ts";
-import { cellAspect, fitGridToBox, type GridCanvasTransform } from "../../map/grid-canvas-transform.ts";
+import { cellAspect, fitGridToBox, type GridCanvasTransform } from "./grid-canvas-transform.ts";
 
 /** What every map layer needs: the grid, its projection, and where each grid point sits on screen. */
 export interface MapViewport {

@@ -1,15 +1,15 @@
 import { useCallback, useMemo } from "react";
 import { useQuery } from "@tanstack/react-query";
-import { gridKeys } from "../../api/grid-keys.ts";
-import { loadOutlineLines } from "../../map/load-outlines.ts";
-import { projectOutlines } from "../../map/project-outlines.ts";
+import { mapKeys } from "./map-keys.ts";
+import { loadOutlineLines } from "./load-outlines.ts";
+import { projectOutlines } from "./project-outlines.ts";
 import { LayerCanvas, type DrawLayer } from "./layer-canvas.tsx";
 import { useMapViewport } from "./map-stage.tsx";
 import { tracePolylines } from "./stroke-polylines.ts";
 
 /** Loaded once per tab: the outline files never change while the app runs. */
 function useOutlineLines() {
-  return useQuery({ queryKey: gridKeys.outlineLines(), queryFn: loadOutlineLines, staleTime: Infinity, gcTime: Infinity });
+  return useQuery({ queryKey: mapKeys.outlineLines(), queryFn: loadOutlineLines, staleTime: Infinity, gcTime: Infinity });
 }
 
 /** Coastlines, country borders and US state borders, projected into this grid (once per geometry). */

@@ -1,5 +1,5 @@
-import { gridToCanvas, type GridCanvasTransform, type XY } from "../../map/grid-canvas-transform.ts";
-import type { GridPolylines } from "../../map/project-outlines.ts";
+import { gridToCanvas, type GridCanvasTransform, type XY } from "./grid-canvas-transform.ts";
+import type { GridPolylines } from "./project-outlines.ts";
 
 /** Adds polylines held in grid coordinates to the current path, placed with the map's transform. */
 export function tracePolylines(context: CanvasRenderingContext2D, lines: GridPolylines, transform: GridCanvasTransform): void {

@@ -8,14 +8,6 @@ export function formatForecastHour(hours: number): string {
   return `F${String(whole).padStart(2, "0")}${minutes > 0 ? `:${String(minutes).padStart(2, "0")}` : ""}`;
 }
 
-/** "35.12° N, 97.80° W" */
-export function formatLatLon(lat: number, lon: number): string {
-  if (!Number.isFinite(lat) || !Number.isFinite(lon)) return "—";
-  const ns = lat >= 0 ? "N" : "S";
-  const ew = lon >= 0 ? "E" : "W";
-  return `${Math.abs(lat).toFixed(2)}° ${ns}, ${Math.abs(lon).toFixed(2)}° ${ew}`;
-}
-
 /** File sizes in binary multiples, as file managers show them: "812 B", "3.4 MB". */
 export function formatFileSize(bytes: number): string {
   if (!Number.isFinite(bytes) || bytes < 0) return "—";

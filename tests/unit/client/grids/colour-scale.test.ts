@@ -1,7 +1,7 @@
 import { describe, expect, it } from "vitest";
 import { interpolateInferno, interpolateRdBu } from "d3-scale-chromatic";
-import { chooseColourScale, parseColour, RAMP_STEPS, tickDecimals, unionRange, type RampScale } from "../../../../src/features/grids/map/colour-scale.ts";
-import { describeMapField } from "../../../../src/features/grids/map/map-fields.ts";
+import { chooseColourScale, parseColour, RAMP_STEPS, tickDecimals, unionRange, type RampScale } from "../../../../src/components/map/colour-scale.ts";
+import { describeMapField } from "../../../../src/components/map/map-fields.ts";
 
 const field = (key: string, unit = "1") => describeMapField({ key, unit });
 const ramp = (key: string, min: number, max: number): RampScale => {

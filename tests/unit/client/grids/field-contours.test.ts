@@ -1,7 +1,7 @@
 import { describe, expect, it } from "vitest";
-import { chooseColourScale } from "../../../../src/features/grids/map/colour-scale.ts";
-import { contourLevels, traceContours } from "../../../../src/features/grids/map/field-contours.ts";
-import { describeMapField } from "../../../../src/features/grids/map/map-fields.ts";
+import { chooseColourScale } from "../../../../src/components/map/colour-scale.ts";
+import { contourLevels, traceContours } from "../../../../src/components/map/field-contours.ts";
+import { describeMapField } from "../../../../src/components/map/map-fields.ts";
 
 describe("contours", () => {
   it("draws lines at the legend's inner ticks only", () => {

@@ -1,5 +1,5 @@
 import { describe, expect, it } from "vitest";
-import { canvasToGrid, cellAspect, cellAtCanvas, fitGridToBox, gridToCanvas } from "../../../../src/features/grids/map/grid-canvas-transform.ts";
+import { canvasToGrid, cellAspect, cellAtCanvas, fitGridToBox, gridToCanvas } from "../../../../src/components/map/grid-canvas-transform.ts";
 import { demoGeometry } from "../../../../server/demo/demo-domain.ts";
 import type { LatLonGeometry } from "../../../../shared/grid/geometry-types.ts";
 

@@ -1,7 +1,7 @@
 import { describe, expect, it } from "vitest";
 import type { IngestJobDto } from "../../../../shared/api/grids.ts";
 import { withJobProgress } from "../../../../src/features/grids/hooks/use-grid-live-updates.ts";
-import { decodeFieldBytes } from "../../../../src/features/grids/api/get-field-values.ts";
+import { decodeFieldBytes } from "../../../../src/components/map/field-values.ts";
 
 const job = (id: number, state: IngestJobDto["state"], progress = 0): IngestJobDto => ({
   id,

@@ -1,5 +1,5 @@
 import { describe, expect, it } from "vitest";
-import { defaultFieldKey, describeMapField, formatMapValue, groupMapFields } from "../../../../src/features/grids/map/map-fields.ts";
+import { defaultFieldKey, describeMapField, formatMapValue, groupMapFields } from "../../../../src/components/map/map-fields.ts";
 
 const info = (key: string, unit = "1") => ({ key, unit });
 

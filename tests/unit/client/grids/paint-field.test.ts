@@ -1,7 +1,7 @@
 import { describe, expect, it } from "vitest";
-import { chooseColourScale, type ColourScale } from "../../../../src/features/grids/map/colour-scale.ts";
-import { describeMapField } from "../../../../src/features/grids/map/map-fields.ts";
-import { paintField } from "../../../../src/features/grids/map/paint-field.ts";
+import { chooseColourScale, type ColourScale } from "../../../../src/components/map/colour-scale.ts";
+import { describeMapField } from "../../../../src/components/map/map-fields.ts";
+import { paintField } from "../../../../src/components/map/paint-field.ts";
 
 const rgbaAt = (pixels: Uint8ClampedArray, row: number, column: number, width: number) => [...pixels.slice((row * width + column) * 4, (row * width + column) * 4 + 4)];
 const lutEntry = (scale: ColourScale, entry: number) => [...scale.lut.slice(entry * 4, entry * 4 + 4)];

@@ -2,7 +2,7 @@ import fs from "node:fs";
 import { describe, expect, it } from "vitest";
 import { mesh } from "topojson-client";
 import type { GeometryCollection, Topology } from "topojson-specification";
-import { polylineCount, projectOutlines, type GridPolylines } from "../../../../src/features/grids/map/project-outlines.ts";
+import { polylineCount, projectOutlines, type GridPolylines } from "../../../../src/components/map/project-outlines.ts";
 import { demoGeometry } from "../../../../server/demo/demo-domain.ts";
 import { projectionForGeometry } from "../../../../shared/grid/projection.ts";
 import type { LatLonGeometry } from "../../../../shared/grid/geometry-types.ts";

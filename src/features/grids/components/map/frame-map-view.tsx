@@ -2,27 +2,34 @@ import { Fragment, useMemo, useState } from "react";
 import { useNavigate, useSearchParams } from "react-router-dom";
 import type { FieldInfoDto } from "@shared/api/grids.ts";
 import { gridFramePath, soundingLinkForPoint } from "@/config/paths.ts";
+import {
+  chooseColourScale,
+  defaultFieldKey,
+  describeMapField,
+  FieldPicker,
+  FieldRasterLayer,
+  formatMapValue,
+  groupMapFields,
+  MapLegend,
+  MapPointerSurface,
+  MapReadout,
+  MapStage,
+  unionRange,
+  useFieldValues,
+  type MapPoint,
+} from "@/components/map/index.ts";
 import { Loading } from "@/components/ui/loading.tsx";
 import { Notice } from "@/components/ui/notice.tsx";
 import { Panel } from "@/components/ui/panel.tsx";
 import { describeError } from "@/lib/describe-error.ts";
 import { formatNumber } from "@/lib/format-units.ts";
-import { useFieldValues } from "../../api/get-field-values.ts";
 import { useFrames, type MapFrame } from "../../api/get-frame.ts";
 import { useRuns } from "../../api/get-runs.ts";
 import { useFrameStepKeys } from "../../hooks/use-frame-step-keys.ts";
-import { chooseColourScale, unionRange } from "../../map/colour-scale.ts";
-import { defaultFieldKey, describeMapField, formatMapValue, groupMapFields } from "../../map/map-fields.ts";
 import { mapViewFromSearch, searchFromMapView, type MapViewSettings } from "../../map-view-params.ts";
-import { FieldPicker } from "./field-picker.tsx";
-import { FieldRasterLayer } from "./field-raster-layer.tsx";
 import { FrameStepper, neighbourFrames } from "./frame-stepper.tsx";
 import { GridFacts } from "./grid-facts.tsx";
-import { MapLegend } from "./map-legend.tsx";
 import { DEFAULT_OVERLAYS, MAP_OVERLAYS, type OverlayContext } from "./map-overlays.tsx";
-import { MapPointerSurface, type MapPoint } from "./map-pointer-surface.tsx";
-import { MapReadout } from "./map-readout.tsx";
-import { MapStage } from "./map-stage.tsx";
 
 const OVERLAY_IDS = MAP_OVERLAYS.map((overlay) => overlay.id);
 

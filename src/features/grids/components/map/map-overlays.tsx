@@ -1,10 +1,6 @@
 import type { ReactNode } from "react";
-import type { FieldValues } from "../../api/get-field-values.ts";
+import { ContoursLayer, OutlinesLayer, type ColourScale, type FieldValues, type MapField } from "@/components/map/index.ts";
 import type { MapFrame } from "../../api/get-frame.ts";
-import type { ColourScale } from "../../map/colour-scale.ts";
-import type { MapField } from "../../map/map-fields.ts";
-import { ContoursLayer } from "./contours-layer.tsx";
-import { OutlinesLayer } from "./outlines-layer.tsx";
 
 /** What an overlay may draw from: the frame, and the field shown beneath it (once loaded). */
 export interface OverlayContext {
