@@ -61,7 +61,7 @@ describe("grids and the map in a real browser", () => {
   beforeEach((context) => {
     // The page as it was when a step failed, for whoever reads the failure.
     onTestFailed(async () => {
-      await screenshot(page, `grids-failed-${context.task.name.slice(0, 40).replace(/\W+/g, "-")}`);
+      await screenshot(page, `grids-error-at-${context.task.name.slice(0, 40).replace(/\W+/g, "-")}`);
       if (pageErrors.length > 0) console.error("Errors in the page:", pageErrors);
     });
   });
