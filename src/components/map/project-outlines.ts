@@ -1,5 +1,4 @@
 import type { GridGeometry } from "@shared/grid/geometry-types.ts";
-import { boundingBox } from "@shared/grid/grid-coordinates.ts";
 import { projectionForGeometry, type GridPoint } from "@shared/grid/projection.ts";
 
 /**
@@ -18,27 +17,16 @@ export interface GridPolylines {
 
 export type LonLat = readonly [number, number] | readonly number[];
 
-/** Degrees of margin around the grid's bounding box: vertices farther out are not even projected. */
-const BOX_MARGIN_DEG = 2;
-
 /** A vertex more than this many grid lengths from the previous one is a wrap (antimeridian), not a line. */
 function maxStep(geometry: GridGeometry): number {
   return Math.max(geometry.nx, geometry.ny) / 2;
 }
 
-function insideBox(box: ReturnType<typeof boundingBox>, lat: number, lon: number): boolean {
-  if (lat < box.south - BOX_MARGIN_DEG || lat > box.north + BOX_MARGIN_DEG) return false;
-  if (box.west === -180 && box.east === 180) return true;
-  // Measure from the western edge so a box across the antimeridian works too.
-  const width = (((box.east - box.west) % 360) + 360) % 360;
-  const offset = (((lon - box.west + BOX_MARGIN_DEG) % 360) + 360) % 360;
-  return offset <= width + 2 * BOX_MARGIN_DEG;
-}
-
 /** Projects lines of [longitude, latitude] vertices (degrees) onto the grid. */
 export function projectOutlines(geometry: GridGeometry, lines: readonly (readonly LonLat[])[]): GridPolylines {
+  // Every vertex is projected: about 83 000 of them took 53 ms for a 1799 × 1059 grid here, while a
+  // latitude–longitude box to skip far-away ones first cost about a second on the same grid.
   const projection = projectionForGeometry(geometry);
-  const box = boundingBox(geometry);
   const iMax = geometry.nx - 0.5;
   const jMax = geometry.ny - 0.5;
   const step = maxStep(geometry);
@@ -54,11 +42,9 @@ export function projectOutlines(geometry: GridGeometry, lines: readonly (readonl
     for (const vertex of line) {
       const lon = vertex[0]!;
       const lat = vertex[1]!;
-      let inside = false;
-      if (insideBox(box, lat, lon)) {
-        projection.latLonToGrid(lat, lon, point);
-        inside = point.i >= -0.5 && point.i <= iMax && point.j >= -0.5 && point.j <= jMax;
-      }
+      projection.latLonToGrid(lat, lon, point);
+      // NaN (a point the projection cannot place, such as the far pole) fails these tests too.
+      const inside = point.i >= -0.5 && point.i <= iMax && point.j >= -0.5 && point.j <= jMax;
       const joins = inside && prevInside && Math.abs(point.i - prevI) <= step && Math.abs(point.j - prevJ) <= step;
       if (joins) {
         if (runLength === 0) {

@@ -1,6 +1,6 @@
 import { describe, expect, it } from "vitest";
 import { chooseColourScale } from "../../../../src/components/map/colour-scale.ts";
-import { contourLevels, traceContours } from "../../../../src/components/map/field-contours.ts";
+import { blockMeans, contourBlockSize, contourLevels, traceContours } from "../../../../src/components/map/field-contours.ts";
 import { describeMapField } from "../../../../src/components/map/map-fields.ts";
 
 describe("contours", () => {
@@ -69,5 +69,34 @@ describe("contours", () => {
         expect(coordinate).toBeLessThanOrEqual(4.5);
       }
     }
+  });
+});
+
+describe("contours of large grids", () => {
+  it("traces a large grid from block means and puts the lines back on the fine grid", () => {
+    const nx = 40;
+    const ny = 30;
+    const values = new Float32Array(nx * ny);
+    for (let j = 0; j < ny; j++) for (let i = 0; i < nx; i++) values[j * nx + i] = 100 * i;
+    // 1200 points with at most 300 allowed: 2 × 2 blocks. Derived in closed form: ⌈√(1200 / 300)⌉ = 2.
+    expect(contourBlockSize(nx, ny, 300)).toBe(2);
+    const [level] = traceContours(values, nx, ny, [{ value: 1200, display: 1200 }], 300);
+    const { points } = level!.rings;
+    expect(points.length).toBeGreaterThan(0);
+    // Derived in closed form: the field is linear, so block means stay on it and 100·i = 1200 at i = 12 exactly.
+    for (let v = 0; v < points.length / 2; v++) expect(points[v * 2]!).toBeCloseTo(12, 5);
+  });
+
+  it("averages whole blocks, skipping missing values and the partial edge blocks", () => {
+    const values = Float32Array.from([
+      1, 3, 10, Number.NaN, 7,
+      5, 7, 20, Number.NaN, 7,
+      Number.NaN, Number.NaN, 2, 2, 7,
+    ]);
+    const means = blockMeans(values, 5, 3, 2);
+    // Derived in closed form: blocks (0,0) = mean(1, 3, 5, 7) = 4 and (1,0) = mean(10, 20) = 15; the fifth column and third row are partial.
+    expect(means).toMatchObject({ nx: 2, ny: 1 });
+    expect([...means.values]).toEqual([4, 15]);
+    expect([...blockMeans(Float32Array.from([Number.NaN, Number.NaN, Number.NaN, Number.NaN]), 2, 2, 2).values]).toEqual([Number.NaN]);
   });
 });
