@@ -37,6 +37,8 @@ export function startScheduler(ctx: JobContext): Scheduler {
     // A safety net after restarts: frames whose evaluation by a current rule version is missing.
     cron.schedule("*/10 * * * *", () => void ctx.services.evaluation.recheckRecent(24).catch(report("rule re-check")), { timezone: "UTC", name: "rule-recheck" }),
     cron.schedule("*/5 * * * *", () => void ctx.services.triggers.expireOld().catch(report("trigger expiry")), { timezone: "UTC", name: "trigger-expiry" }),
+    cron.schedule("*/30 * * * * *", () => void ctx.services.notify.escalation.escalateOverdue().catch(report("escalation")), { timezone: "UTC", name: "escalation" }),
+    cron.schedule("20 * * * * *", () => void ctx.services.notify.digests.releaseDue().catch(report("quiet-hours digests")), { timezone: "UTC", name: "quiet-hours-digests" }),
     cron.schedule("5 * * * *", () => void pruneOldRuns(ctx.dataSource, config.dataDir, config.GRID_RETENTION_DAYS, new Date()).catch(report("grid retention")), {
       timezone: "UTC",
       name: "grid-retention",

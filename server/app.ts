@@ -21,6 +21,7 @@ import { createHealthRouter } from "./routes/health.router.ts";
 import { createAuthRouter } from "./routes/auth.router.ts";
 import { createUsersRouter } from "./routes/users.router.ts";
 import { createAuditRouter } from "./routes/audit.router.ts";
+import { createNotificationRouters } from "./routes/notifications.router.ts";
 
 export interface AppDeps {
   services: Services;
@@ -90,6 +91,7 @@ export function createApp(deps: AppDeps): BellwetherApp {
   app.use("/api/rules", createRulesRouter(services.rules, services.ruleMaps, routes));
   app.use("/api/triggers", createTriggersRouter(services.triggers, services.ruleMaps, routes));
   app.use("/api/timeline", createTimelineRouter(services.triggers, routes));
+  for (const [prefix, router] of createNotificationRouters({ notify: services.notify, config, dataSource }, routes)) app.use(prefix, router);
   app.use("/api", apiNotFound);
 
   if (deps.clientDir && fs.existsSync(path.join(deps.clientDir, "index.html"))) {

@@ -64,6 +64,9 @@ export async function startBellwether(overrides: Partial<Record<string, string>>
   const scheduler: Scheduler | null = config.JOBS ? startScheduler({ dataSource, logger, services }) : null;
   const url = `http://${config.HOST === "0.0.0.0" ? "127.0.0.1" : config.HOST}:${port}`;
   logger.info({ url }, "Bellwether is serving");
+  // Mail and text senders: the local fakes start here when no real credentials are configured.
+  const notifyStart = await services.notify.start(url);
+  logger.info({ mail: services.notify.transportKinds.mail, sms: services.notify.transportKinds.sms, fakes: services.notify.fakes.status(), resumed: notifyStart.resumed }, "notification transports ready");
   if (newDatabase && config.DEMO && config.DEMO_GRIDS) {
     // The invented demo run lands in the inbox like real model output, a file per forecast hour.
     dropDemoRun(config.inboxDir, defaultDemoRun(new Date())).then(

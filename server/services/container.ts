@@ -12,7 +12,8 @@ import { RuleService } from "./rule.service.ts";
 import { TriggerService } from "./trigger.service.ts";
 import { EvaluationService } from "./evaluation.service.ts";
 import { RuleMapService } from "../rules/rule-map.service.ts";
-import { SILENT_NOTIFIER, type TriggerNotifier } from "./trigger-notifier.ts";
+import type { TriggerNotifier } from "./trigger-notifier.ts";
+import { createNotifyServices, type NotifyServices } from "../notify/notify-module.ts";
 import { decodeGridFile } from "../ingest/decode-file.ts";
 import { inProcessColumnDiagnoser, poolColumnDiagnoser } from "../ingest/column-diagnoser.ts";
 import { ColumnDiagnosticsPool } from "../diagnostics/column-pool.ts";
@@ -32,6 +33,8 @@ export interface Services {
   triggers: TriggerService;
   evaluation: EvaluationService;
   ruleMaps: RuleMapService;
+  /** Contacts, on-call, the notification outbox and its dispatcher, escalation, digests and the local fakes. */
+  notify: NotifyServices;
   /** Releases worker threads and other resources. */
   close(): Promise<void>;
 }
@@ -49,7 +52,8 @@ export function createServices(config: AppConfig, dataSource: DataSource, logger
   const zones = new ZoneService(dataSource, now);
   const rules = new RuleService(dataSource, zones, now);
   const triggers = new TriggerService(dataSource, events, now);
-  const evaluation = new EvaluationService({ dataSource, dataDir: config.dataDir, rules, zones, triggers, notifier: overrides.notifier ?? SILENT_NOTIFIER, logger, now });
+  const notify = createNotifyServices({ config, dataSource, logger, triggers, zones, rules, now });
+  const evaluation = new EvaluationService({ dataSource, dataDir: config.dataDir, rules, zones, triggers, notifier: overrides.notifier ?? notify.notifier, logger, now });
   // DIAGNOSTIC_THREADS=0 or 1 keeps the work on the main thread (tests, tiny grids).
   const threads = config.DIAGNOSTIC_THREADS ?? os.availableParallelism();
   const pool = !overrides.diagnoseColumns && threads > 1 ? new ColumnDiagnosticsPool({ threads }) : null;
@@ -76,10 +80,12 @@ export function createServices(config: AppConfig, dataSource: DataSource, logger
     rules,
     triggers,
     evaluation,
+    notify,
     ruleMaps: new RuleMapService(dataSource, config.dataDir, rules, zones),
     async close() {
       await ingest.stop();
       await evaluation.stop();
+      await notify.close();
       await pool?.destroy();
     },
   };

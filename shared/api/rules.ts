@@ -77,6 +77,8 @@ export const ruleDefinition = z.object({
   /** No new trigger for the same rule and zone within this many hours, unless the severity rises. */
   coolDownHours: z.number().int().min(0).max(168).default(6),
   recipients: recipientsSchema,
+  /** Minutes an open trigger may wait for acknowledgement before each escalation level; the office default when absent. */
+  escalateAfterMinutes: z.number().int().min(1, "Escalate after at least 1 minute").max(1440, "Escalate within a day (1440 minutes)").optional(),
   enabled: z.boolean().default(true),
 });
 export type RuleDefinition = z.infer<typeof ruleDefinition>;

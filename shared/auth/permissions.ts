@@ -34,6 +34,19 @@ export const PERMISSIONS = {
   "triggers.acknowledge": ["forecaster", "lead"],
   "triggers.comment": ["forecaster", "lead"],
   "triggers.close": ["lead"],
+  // Contacts and templates are office data: leads and admins keep them, managers may look.
+  "contacts.read": ["lead", "manager", "admin"],
+  "contacts.write": ["lead", "admin"],
+  // Everyone may see who is on shift; leads set the schedule.
+  "oncall.read": EVERYONE,
+  "oncall.write": ["lead", "admin"],
+  // Who was told about a trigger, and how, is part of every trigger's record.
+  "notifications.read": EVERYONE,
+  "notifications.resend": ["lead", "admin"],
+  "notifications.settings": ["admin"],
+  // The local stand-ins for the mail and text services hold copies of every message.
+  "fakes.read": ["admin"],
+  "fakes.control": ["admin"],
 } as const satisfies Record<string, readonly Role[]>;
 
 export type Permission = keyof typeof PERMISSIONS;

@@ -4,6 +4,8 @@ import { ROLES, PERMISSIONS, type Role } from "../../shared/auth/permissions.ts"
 import { startTestServer, signIn, anonymous, ingestBytes, insertOpenTrigger, DEMO_USER_FOR_ROLE, type SignedInAgent, type TestServer } from "../helpers/test-server.ts";
 import { fakeGribBytes, syntheticRecords } from "../helpers/synthetic-grid.ts";
 import { SYSTEM_ACTOR } from "../../server/audit/audit-log.ts";
+import { DEFAULT_TEMPLATES } from "../../shared/api/notifications.ts";
+import { insertNotification, makeContact, makeGroup, makeShift } from "../helpers/notify-fixtures.ts";
 import { testRule } from "../helpers/rule-builder.ts";
 import type { HttpMethod, RouteEntry } from "../../server/http/route-table.ts";
 
@@ -82,6 +84,30 @@ const EXAMPLES: Record<string, Example> = {
   "post /api/triggers/:id/comments": { path: "/api/triggers/1/comments", body: () => ({ text: "Matrix comment" }) },
   "post /api/triggers/:id/false-alarm": { path: "", prepare: async () => `/api/triggers/${await insertOpenTrigger(server, 1, 1)}/false-alarm`, body: () => ({ reason: "Matrix check" }) },
   "get /api/timeline/": { path: "/api/timeline" },
+  "get /api/contacts/": { path: "/api/contacts" },
+  "get /api/contacts/:id": { path: "/api/contacts/1" },
+  "post /api/contacts/": { path: "/api/contacts", body: () => ({ name: `Matrix contact ${++counter}`, email: `matrix${counter}@example.test`, channels: ["email"] }) },
+  "put /api/contacts/:id": { path: "/api/contacts/1", body: () => ({ name: `Matrix contact one ${++counter}`, email: "one@example.test", mobile: "+15550100101", channels: ["email", "sms"] }) },
+  "delete /api/contacts/:id": { path: "", prepare: async () => `/api/contacts/${(await makeContact(server)).id}` },
+  "get /api/contact-groups/": { path: "/api/contact-groups" },
+  "post /api/contact-groups/": { path: "/api/contact-groups", body: () => ({ name: `Matrix group ${++counter}`, contactIds: [1] }) },
+  "put /api/contact-groups/:id": { path: "/api/contact-groups/1", body: () => ({ name: `Matrix group one ${++counter}`, contactIds: [1] }) },
+  "delete /api/contact-groups/:id": { path: "", prepare: async () => `/api/contact-groups/${(await makeGroup(server)).id}` },
+  "get /api/on-call/": { path: "/api/on-call" },
+  "get /api/on-call/now": { path: "/api/on-call/now" },
+  "post /api/on-call/": { path: "/api/on-call", body: () => ({ contactId: 1, role: "lead", startsAt: "2030-01-01T00:00:00Z", endsAt: "2030-01-01T12:00:00Z" }) },
+  "put /api/on-call/:id": { path: "/api/on-call/1", body: () => ({ contactId: 1, role: "forecaster", startsAt: "2020-01-01T00:00:00Z", endsAt: "2020-01-01T12:00:00Z", note: `Matrix ${++counter}` }) },
+  "delete /api/on-call/:id": { path: "", prepare: async () => `/api/on-call/${(await makeShift(server, 1, "lead", new Date("2031-01-01T00:00:00Z"), new Date("2031-01-01T08:00:00Z"))).id}` },
+  "get /api/notifications/": { path: "/api/notifications?triggerId=1" },
+  "get /api/notifications/settings": { path: "/api/notifications/settings" },
+  "put /api/notifications/settings": { path: "/api/notifications/settings", body: () => ({ templates: DEFAULT_TEMPLATES, escalationContactId: 1 }) },
+  "get /api/notifications/:id": { path: "/api/notifications/1" },
+  "post /api/notifications/:id/resend": { path: "", prepare: async () => `/api/notifications/${await insertNotification(server, 1, "failed")}/resend` },
+  "get /api/fakes/": { path: "/api/fakes" },
+  "get /api/fakes/mail": { path: "/api/fakes/mail" },
+  "get /api/fakes/sms": { path: "/api/fakes/sms" },
+  "put /api/fakes/behaviour": { path: "/api/fakes/behaviour", body: () => ({ mail: { delayMs: 0 }, sms: { failureRate: 0 } }) },
+  "delete /api/fakes/messages": { path: "/api/fakes/messages" },
   "delete /api/zones/:id": {
     path: "",
     // Each cell deletes a zone of its own, so zone 1 stays for the other cells.
@@ -130,6 +156,11 @@ beforeAll(async () => {
   await server.services.rules.create(SYSTEM_ACTOR, RULE() as never);
   await ingestBytes(server, fakeGribBytes("matrix-seed"), "seed.grib2");
   await server.services.evaluation.idle();
+  // Contact 1, group 1, shift 1 and notification 1 for the notification routes.
+  const contact = await makeContact(server);
+  await makeGroup(server, [contact.id]);
+  await makeShift(server, contact.id, "forecaster", new Date("2020-01-01T00:00:00Z"), new Date("2020-01-01T12:00:00Z"));
+  await insertNotification(server, 1, "sent");
 });
 afterAll(async () => server.close());
 
