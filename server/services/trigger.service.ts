@@ -17,6 +17,8 @@ import { RuleVersionEntity } from "../entities/rule-version.entity.ts";
 import { RuleEvaluationEntity } from "../entities/rule-evaluation.entity.ts";
 import { ZoneEntity } from "../entities/zone.entity.ts";
 import { IngestJobEntity } from "../entities/ingest-job.entity.ts";
+import { StormReportEntity } from "../entities/storm-report.entity.ts";
+import { toStormReportDto } from "../storm-reports/storm-report.service.ts";
 import { appendAudit, SYSTEM_ACTOR, type AuditActor } from "../audit/audit-log.ts";
 import { writeTransaction } from "../db/data-source.ts";
 import { ConflictError, NotFoundError } from "../errors.ts";
@@ -160,16 +162,18 @@ export class TriggerService {
     });
   }
 
-  /** Triggers, grid arrivals and escalations, newest first. */
+  /** Triggers, grid arrivals, escalations and storm reports (at the time observed), newest first. */
   async timeline(limit: number, before?: string): Promise<TimelineEntryDto[]> {
     const cutoff = before ? new Date(before).toISOString() : "9999";
     const triggers = await this.dataSource.getRepository(TriggerEntity).find({ where: { openedAt: LessThan(cutoff) }, order: { openedAt: "DESC" }, take: limit });
     const jobs = await this.dataSource.getRepository(IngestJobEntity).find({ where: { finishedAt: LessThan(cutoff) }, order: { finishedAt: "DESC" }, take: limit });
     const escalations = await this.dataSource.getRepository(TriggerEventEntity).find({ where: { kind: "escalated", at: LessThan(cutoff) }, order: { at: "DESC" }, take: limit });
+    const reports = await this.dataSource.getRepository(StormReportEntity).find({ where: { time: LessThan(cutoff) }, order: { time: "DESC" }, take: limit });
     const entries: TimelineEntryDto[] = [
       ...(await this.summaries(triggers)).map((t) => ({ kind: "trigger" as const, at: t.openedAt, trigger: t })),
       ...jobs.map((j) => ({ kind: "grid" as const, at: j.finishedAt!, jobId: j.id, name: j.originalName, state: j.state, frameCount: j.frameCount, reason: j.failureReason })),
       ...escalations.map((e) => ({ kind: "escalation" as const, at: e.at, triggerId: e.triggerId, note: e.note })),
+      ...reports.map((r) => ({ kind: "report" as const, at: r.time, report: toStormReportDto(r) })),
     ];
     return entries.sort((a, b) => b.at.localeCompare(a.at)).slice(0, limit);
   }

@@ -11,6 +11,10 @@ export const auditQuery = z.object({
 });
 export type AuditQuery = z.infer<typeof auditQuery>;
 
+/** The same filters without paging: the export takes every matching entry. */
+export const auditExportQuery = auditQuery.omit({ page: true, pageSize: true });
+export type AuditExportQuery = z.infer<typeof auditExportQuery>;
+
 export const auditEntryDto = z.object({
   id: z.number().int(),
   at: z.string(),

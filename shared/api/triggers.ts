@@ -1,5 +1,6 @@
 import { z } from "zod";
 import { SEVERITY_KEYS } from "../rules/severity.ts";
+import { stormReportDto } from "./storm-reports.ts";
 
 /** Bellwether's trigger states: open → acknowledged → cleared | expired | false alarm. */
 export const TRIGGER_STATES = ["open", "acknowledged", "cleared", "expired", "false-alarm"] as const;
@@ -92,11 +93,12 @@ export const acknowledgeInput = z.object({ note: z.string().trim().max(2000).opt
 export const commentInput = z.object({ text: z.string().trim().min(1, "Write a comment").max(2000) });
 export const falseAlarmInput = z.object({ reason: z.string().trim().min(3, "Say why this was a false alarm").max(500) });
 
-/** One line of the timeline: a trigger, a grid arrival or an escalation. */
+/** One line of the timeline: a trigger, a grid arrival, an escalation or an observed storm report. */
 export const timelineEntryDto = z.discriminatedUnion("kind", [
   z.object({ kind: z.literal("trigger"), at: z.string(), trigger: triggerSummaryDto }),
   z.object({ kind: z.literal("grid"), at: z.string(), jobId: z.number().int(), name: z.string(), state: z.string(), frameCount: z.number().int(), reason: z.string().nullable() }),
   z.object({ kind: z.literal("escalation"), at: z.string(), triggerId: z.number().int(), note: z.string().nullable() }),
+  z.object({ kind: z.literal("report"), at: z.string(), report: stormReportDto }),
 ]);
 export type TimelineEntryDto = z.infer<typeof timelineEntryDto>;
 
