@@ -50,6 +50,16 @@ function windAt(z: number, heights: readonly number[], values: readonly number[]
   return values[values.length - 1]!;
 }
 
+/** A smooth, deterministic pattern in −1…1 made of a few drifting waves (invented texture, not physics). */
+function mesoscaleTexture(x: number, y: number, hour: number): number {
+  const drift = 15 * hour;
+  return (
+    0.45 * Math.sin((x - drift) / 90 + y / 130) +
+    0.35 * Math.sin((x + 0.6 * y) / 55 + 1.7) * Math.cos((y - drift) / 75) +
+    0.2 * Math.sin(x / 31 - y / 43 + 0.8 * hour)
+  );
+}
+
 interface JetStreak {
   x: number;
   y: number;
@@ -105,11 +115,13 @@ export function demoFrameFields(geometry: LambertGeometry, hour: number): DemoFr
       const Y = ((j - (geometry.ny - 1) / 2) * geometry.dy) / 1000;
 
       // Surface: the dryline, moisture fading to the north, terrain rising to the west.
-      const drylineX = -190 + 20 * hour + 0.15 * Y;
+      // Mesoscale texture: a bulging dryline and patchy moisture, so maps look like weather, not geometry.
+      const texture = mesoscaleTexture(X, Y, hour);
+      const drylineX = -190 + 20 * hour + 0.15 * Y + 35 * Math.sin(Y / 140 + 0.3 * hour);
       const moist = smoothStep((X - drylineX) / 30) * (1 - smoothStep((Y - 340) / 80));
       const zs = clamp(650 - 0.45 * X, 250, 1300);
       const t2 = 300.5 + 3 * (1 - moist) + 2 * Math.sin((Math.PI * clamp(hour, 0, 8)) / 12) - 0.006 * Y;
-      const td2 = Math.min(t2 - 1, moist * (293.8 - 0.004 * Y) + (1 - moist) * 271);
+      const td2 = Math.min(t2 - 1, moist * (293.8 - 0.004 * Y + 1.4 * texture) + (1 - moist) * (271 + 2 * texture));
       const mixedTop = moist * 1300 + (1 - moist) * 2900;
       const cap = moist * Math.max(0, 7.5 - 1.1 * hour);
 
