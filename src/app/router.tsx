@@ -78,6 +78,22 @@ export function createAppRouter(queryClient: QueryClient) {
               children: [{ index: true, lazy: () => import("./routes/soundings.tsx") }],
             },
             {
+              path: paths.rules,
+              element: <RequirePermission area="rules" />,
+              children: [
+                { index: true, lazy: () => import("./routes/rules.tsx") },
+                { path: "new", lazy: () => import("./routes/rule-new.tsx") },
+                { path: ":ruleId", lazy: () => import("./routes/rule-detail.tsx") },
+                { path: ":ruleId/history", lazy: () => import("./routes/rule-history.tsx") },
+                { path: ":ruleId/backtest", lazy: () => import("./routes/rule-backtest.tsx") },
+              ],
+            },
+            {
+              path: paths.zones,
+              element: <RequirePermission area="zones" />,
+              children: [{ index: true, lazy: () => import("./routes/zones.tsx") }],
+            },
+            {
               path: paths.accounts,
               element: <RequirePermission area="accounts" />,
               children: [{ index: true, lazy: () => import("./routes/accounts.tsx") }],

@@ -19,6 +19,8 @@ export const NAV_ITEMS = [
   { id: "overview", path: paths.overview, label: "Overview", permission: "session.read", shortcut: "o" },
   { id: "grids", path: paths.grids, label: "Grids", permission: "grids.read", shortcut: "m" },
   { id: "soundings", path: paths.soundings, label: "Soundings", permission: "soundings.diagnose", shortcut: "s" },
+  { id: "rules", path: paths.rules, label: "Rules", permission: "rules.read", shortcut: "r" },
+  { id: "zones", path: paths.zones, label: "Zones", permission: "zones.read", shortcut: "z" },
   { id: "accounts", path: paths.accounts, label: "Accounts", permission: "users.read", shortcut: "a" },
   { id: "audit", path: paths.audit, label: "Audit trail", permission: "audit.read", shortcut: "u" },
 ] as const satisfies readonly NavItem[];

@@ -28,9 +28,9 @@ export const MIN_VERTICES = 3;
 const round = (degrees: number) => Math.round(degrees * 1e4) / 1e4;
 
 /** The ring as it would be stored if closed now (first vertex repeated), or null with too few vertices. */
-export function drawingRing(state: DrawingState): number[][] | null {
+export function drawingRing(state: DrawingState): Array<[number, number]> | null {
   if (state.vertices.length < MIN_VERTICES) return null;
-  return [...state.vertices.map(([lon, lat]) => [lon, lat]), [state.vertices[0]![0], state.vertices[0]![1]]];
+  return [...state.vertices.map(([lon, lat]): [number, number] => [lon, lat]), [state.vertices[0]![0], state.vertices[0]![1]]];
 }
 
 /** What is wrong with the ring as drawn, closed back to its first vertex (empty when it is fine). */
