@@ -55,6 +55,7 @@ export { cellAspect, fitGridToBox, gridToCanvas, canvasToGrid, cellAtCanvas, typ
 export { projectOutlines, polylineCount, type GridPolylines, type LonLat } from "./project-outlines.ts";
 export { projectZoneOutline } from "./project-zone-outline.ts";
 export { contourLevels, traceContours, type ContourLevel } from "./field-contours.ts";
+export { labelContourLevels } from "./contour-labels.ts";
 export { paintField } from "./paint-field.ts";
 export { paintMask, maskCount } from "./paint-mask.ts";
 export { tracePolylines } from "./stroke-polylines.ts";
