@@ -106,3 +106,28 @@ export const gridGeometryDto = z.discriminatedUnion("kind", [
     southPole: z.boolean(),
   }),
 ]);
+
+/** One vertex of a jet-streak axis: position and signed distance from the core (m, positive downstream). */
+export const jetAxisVertexDto = z.object({ lat: z.number(), lon: z.number(), i: z.number(), j: z.number(), s: z.number() });
+
+/** A jet streak found on a frame's jet level (shared/meteo/jet/jet-types.ts `JetStreak`). */
+export const jetStreakDto = z.object({
+  id: z.number().int(),
+  core: z.object({ lat: z.number(), lon: z.number(), i: z.number(), j: z.number(), speed: z.number() }),
+  hemisphere: z.enum(["north", "south"]),
+  axis: z.array(jetAxisVertexDto),
+  curvatureClass: z.union([z.literal(-1), z.literal(0), z.literal(1)]),
+  curvatureStrong: z.boolean(),
+  // NaN turning (no axis to measure) arrives as null in JSON.
+  turningAngleDegrees: z.number().nullable(),
+  labelledPoints: z.number().int(),
+});
+export type JetStreakDto = z.infer<typeof jetStreakDto>;
+
+/** `GET /api/grids/frames/:id/jet-streaks`: the jet level (Pa; null for frames stored before jet diagnostics), its streaks and data-quality notes. */
+export const jetStreaksDto = z.object({
+  jetLevelPressure: z.number().nullable(),
+  streaks: z.array(jetStreakDto),
+  warnings: z.array(z.string()),
+});
+export type JetStreaksDto = z.infer<typeof jetStreaksDto>;

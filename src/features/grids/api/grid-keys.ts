@@ -8,4 +8,5 @@ export const gridKeys = {
   runs: () => [...gridKeys.all, "runs"] as const,
   frames: () => [...gridKeys.all, "frame"] as const,
   frame: (frameId: number) => [...gridKeys.frames(), frameId] as const,
+  jetStreaks: (frameId: number) => [...gridKeys.frame(frameId), "jet-streaks"] as const,
 };
