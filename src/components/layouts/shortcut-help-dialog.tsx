@@ -1,4 +1,5 @@
 import type { NavItem } from "@/config/navigation.ts";
+import { useRegisteredPageShortcuts } from "@/hooks/use-page-shortcuts.ts";
 import { CHORD_PREFIX } from "@/lib/key-chords.ts";
 import { Dialog } from "../ui/dialog.tsx";
 
@@ -21,7 +22,9 @@ const OTHER_SHORTCUTS: ReadonlyArray<{ label: string; keys: readonly string[] }>
 ];
 
 export function ShortcutHelpDialog({ open, onClose, items }: { open: boolean; onClose: () => void; items: readonly NavItem[] }) {
-  const rows = [...items.map((item) => ({ label: `Go to ${item.label}`, keys: [CHORD_PREFIX, item.shortcut] })), ...OTHER_SHORTCUTS];
+  // Keys of the page that is open (the timeline's j / k / a) come after the navigation chords.
+  const pageRows = useRegisteredPageShortcuts();
+  const rows = [...items.map((item) => ({ label: `Go to ${item.label}`, keys: [CHORD_PREFIX, item.shortcut] })), ...pageRows, ...OTHER_SHORTCUTS];
   return (
     <Dialog open={open} onClose={onClose} title="Keyboard shortcuts" description="Shortcuts do nothing while you are typing in a field." width="sm">
       <table className="w-full">
