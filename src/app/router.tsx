@@ -63,7 +63,15 @@ export function createAppRouter(queryClient: QueryClient) {
           // Pathless so a failing page shows its error inside the layout, keeping menu and header.
           errorElement: <RouteError />,
           children: [
-            { index: true, element: <OverviewRoute /> },
+            {
+              // The timeline is the home page; its area guard reads the navigation list like every other.
+              element: <RequirePermission area="timeline" />,
+              children: [
+                { index: true, lazy: () => import("./routes/timeline.tsx") },
+                { path: `${paths.triggers}/:triggerId`, lazy: () => import("./routes/trigger.tsx") },
+              ],
+            },
+            { path: paths.overview, element: <OverviewRoute /> },
             {
               path: paths.grids,
               element: <RequirePermission area="grids" />,

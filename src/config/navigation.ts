@@ -16,6 +16,7 @@ export interface NavItem {
  * shortcuts all read this list.
  */
 export const NAV_ITEMS = [
+  { id: "timeline", path: paths.timeline, label: "Timeline", permission: "triggers.read", shortcut: "t" },
   { id: "overview", path: paths.overview, label: "Overview", permission: "session.read", shortcut: "o" },
   { id: "grids", path: paths.grids, label: "Grids", permission: "grids.read", shortcut: "m" },
   { id: "soundings", path: paths.soundings, label: "Soundings", permission: "soundings.diagnose", shortcut: "s" },

@@ -1,6 +1,10 @@
 /** Every client URL in one place, so links and routes never drift apart. */
 export const paths = {
-  overview: "/",
+  /** Where signing in lands: the timeline. */
+  home: "/",
+  timeline: "/",
+  overview: "/overview",
+  triggers: "/triggers",
   login: "/login",
   soundings: "/soundings",
   grids: "/grids",
@@ -17,6 +21,11 @@ export const rulePaths = {
   history: (ruleId: number) => `${paths.rules}/${ruleId}/history`,
   backtest: (ruleId: number) => `${paths.rules}/${ruleId}/backtest`,
 };
+
+/** The page of one trigger. */
+export function triggerPath(triggerId: number): string {
+  return `${paths.triggers}/${triggerId}`;
+}
 
 /**
  * The Soundings page showing the model column nearest a map point of one frame (the map viewer links here).
@@ -36,15 +45,15 @@ export function gridFramePath(frameId: number, search = ""): string {
 /** The sign-in URL that returns the user to `next` afterwards. */
 export function loginPathFor(next: string): string {
   const target = safeNextPath(next);
-  return target === paths.overview ? paths.login : `${paths.login}?next=${encodeURIComponent(target)}`;
+  return target === paths.home ? paths.login : `${paths.login}?next=${encodeURIComponent(target)}`;
 }
 
 /**
  * Where to go after signing in. Only same-site paths are accepted ("/audit?page=2"), so a crafted
- * link cannot send someone to another site; anything else falls back to the overview.
+ * link cannot send someone to another site; anything else falls back to the home page (the timeline).
  */
 export function safeNextPath(next: string | null | undefined): string {
-  if (!next || !next.startsWith("/") || next.startsWith("//") || next.startsWith("/\\")) return paths.overview;
-  if (next === paths.login || next.startsWith(`${paths.login}?`) || next.startsWith(`${paths.login}/`)) return paths.overview;
+  if (!next || !next.startsWith("/") || next.startsWith("//") || next.startsWith("/\\")) return paths.home;
+  if (next === paths.login || next.startsWith(`${paths.login}?`) || next.startsWith(`${paths.login}/`)) return paths.home;
   return next;
 }

@@ -5,17 +5,17 @@ import { ROLE_DESCRIPTIONS } from "@/config/role-descriptions.ts";
 import { PageHeader } from "@/components/ui/page-header.tsx";
 import { Panel } from "@/components/ui/panel.tsx";
 
-/** The landing page. For now it explains what will appear here and what the signed-in roles allow. */
+/** The account overview: the areas open to the signed-in roles and what each role allows. */
 export function OverviewPage({ displayName, roles, areas }: { displayName: string; roles: readonly Role[]; areas: readonly NavItem[] }) {
   return (
     <>
       <PageHeader title="Overview" description={`Signed in as ${displayName}.`} />
       <div className="grid gap-4 lg:grid-cols-[2fr_1fr]">
-        <Panel title="What this page will show">
+        <Panel title="Where things are">
           <p className="max-w-prose">
-            Once model runs are flowing in, this page will open on the office's timeline: the triggers that are open now,
-            which rule and zone each belongs to, its model run and valid time, and whether the signal grew or faded since
-            the previous run. Until then, use the menu on the left.
+            The timeline is the home page: every trigger as it opens, with its rule, zone, model run and valid time, how
+            widespread and how strong it is, and whether it grew or faded since the previous run, beside the grid arrivals
+            and escalations. This page sums up your account: the areas open to you and what your roles allow.
           </p>
         </Panel>
         <Panel title="Open to you">
