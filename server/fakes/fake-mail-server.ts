@@ -21,6 +21,8 @@ export class FakeMailServer {
   readonly misbehaviour = new Misbehaviour(0x5eed_0001);
   private readonly messages: FakeMailDto[] = [];
   private readonly seenMessageIds = new Set<string>();
+  /** Attachment bytes by message id, kept out of the JSON listing. */
+  private readonly contents = new Map<number, Buffer[]>();
   private readonly listeners = new Set<(mail: FakeMailDto) => void>();
   private server: SMTPServer | null = null;
   private port: number | null = null;
@@ -56,10 +58,13 @@ export class FakeMailServer {
   }
 
   private async receive(stream: NodeJS.ReadableStream, envelopeTo: string[]): Promise<Error | null> {
-    const mail = await simpleParser(stream as never);
-    await this.misbehaviour.delay();
+    // Keep cid: image links as sent (the parser would otherwise inline them as data URIs).
+    const mail = await simpleParser(stream as never, { skipImageLinks: true });
     const verdict = this.misbehaviour.verdict();
-    if (verdict === "refuse") return this.refusal();
+    if (verdict === "refuse") {
+      await this.misbehaviour.delay();
+      return this.refusal();
+    }
     const messageId = mail.messageId ?? null;
     if (messageId && this.seenMessageIds.has(messageId)) {
       this.duplicates++;
@@ -80,9 +85,13 @@ export class FakeMailServer {
         triggerIds: ids,
       };
       this.messages.push(stored);
-      if (this.messages.length > MAX_STORED) this.messages.shift();
+      this.contents.set(stored.id, mail.attachments.map((a) => a.content));
+      if (this.messages.length > MAX_STORED) this.contents.delete(this.messages.shift()!.id);
       for (const listener of this.listeners) listener(stored);
     }
+    // A slow reply comes after the message is stored: the window in which a sender that crashes
+    // has sent a message without knowing it.
+    await this.misbehaviour.delay();
     return verdict === "store-then-refuse" ? this.refusal() : null;
   }
 
@@ -97,6 +106,11 @@ export class FakeMailServer {
     return [...this.messages].reverse();
   }
 
+  /** The bytes of one stored attachment (for checks that open the map image). */
+  attachment(messageId: number, index: number): Buffer | null {
+    return this.contents.get(messageId)?.[index] ?? null;
+  }
+
   /** Calls `listener` for every message stored from now on; returns the function that stops it. */
   onMessage(listener: (mail: FakeMailDto) => void): () => void {
     this.listeners.add(listener);
@@ -105,6 +119,7 @@ export class FakeMailServer {
 
   clear(): void {
     this.messages.length = 0;
+    this.contents.clear();
     this.seenMessageIds.clear();
     this.duplicates = 0;
     this.refused = 0;

@@ -57,12 +57,16 @@ export class FakeSmsServer {
     const accountSid = String(req.params.accountSid);
     if (basicAuthUser(req) !== accountSid) return providerError(res, 401, 20003, "Authenticate: the account in the URL and the credentials differ");
     const key = req.header(IDEMPOTENCY_HEADER) ?? null;
-    await this.misbehaviour.delay();
     const verdict = this.misbehaviour.verdict();
-    if (verdict === "refuse") return this.refuse(res);
+    // Slowness comes after storing, like a provider that accepted the message but answers late.
+    if (verdict === "refuse") {
+      await this.misbehaviour.delay();
+      return this.refuse(res);
+    }
     const earlier = key ? this.replies.get(key) : undefined;
     if (earlier) {
       this.duplicates++;
+      await this.misbehaviour.delay();
       if (verdict === "store-then-refuse") return this.refuse(res);
       res.status(earlier.status).json(earlier.body);
       return;
@@ -100,6 +104,7 @@ export class FakeSmsServer {
       },
     };
     if (key) this.replies.set(key, reply);
+    await this.misbehaviour.delay();
     if (verdict === "store-then-refuse") return this.refuse(res);
     res.status(reply.status).json(reply.body);
   }

@@ -16,7 +16,7 @@ export function utcCycle(iso: string): string {
 
 /** "Sat 2 May 13:00 CDT" in the office's zone. */
 export function localDateTime(iso: string, timeZone: string): string {
-  const parts = new Intl.DateTimeFormat("en-GB", { timeZone, weekday: "short", day: "numeric", month: "short", hour: "2-digit", minute: "2-digit", hourCycle: "h23", timeZoneName: "short" }).formatToParts(new Date(iso));
+  const parts = new Intl.DateTimeFormat("en-US", { timeZone, weekday: "short", day: "numeric", month: "short", hour: "2-digit", minute: "2-digit", hourCycle: "h23", timeZoneName: "short" }).formatToParts(new Date(iso));
   const get = (type: Intl.DateTimeFormatPartTypes) => parts.find((p) => p.type === type)?.value ?? "";
   return `${get("weekday")} ${get("day")} ${get("month")} ${get("hour")}:${get("minute")} ${get("timeZoneName")}`;
 }
@@ -45,5 +45,9 @@ export function displayValue(key: string, value: number | null): string {
 
 /** One line per field that met the rule: its range over the matched points. */
 export function peakLines(fields: ReadonlyArray<{ key: string; max: number | null; min: number | null }>): string[] {
-  return fields.map((f) => (f.min !== null && f.max !== null && f.min !== f.max ? `${f.key}: ${displayValue(f.key, f.min)} to ${displayValue(f.key, f.max)}` : `${f.key}: ${displayValue(f.key, f.max ?? f.min)}`));
+  return fields.map((f) => {
+    const low = displayValue(f.key, f.min);
+    const high = displayValue(f.key, f.max ?? f.min);
+    return f.min !== null && f.max !== null && low !== high ? `${f.key}: ${low} to ${high}` : `${f.key}: ${high}`;
+  });
 }
