@@ -3,7 +3,10 @@ import type { AuditExportQuery } from "../../shared/api/audit.ts";
 import { csvDocument } from "../../shared/csv/csv-text.ts";
 import { AuditEntryEntity } from "../entities/audit-entry.entity.ts";
 
-/** Columns of the audit CSV: every stored field, hashes included, so a reviewer can re-check the chain. */
+/**
+ * Columns of the audit CSV: every stored field exactly as stored (an empty cell is a null), hashes
+ * included, so a reviewer can recompute the chain from the file alone.
+ */
 export const AUDIT_CSV_HEADER = ["id", "at", "actor", "actor_roles", "action", "target_type", "target_id", "before", "after", "request_id", "prev_hash", "hash"] as const;
 export const MAX_AUDIT_EXPORT_ROWS = 100_000;
 const BATCH = 2000;
@@ -27,5 +30,6 @@ export async function auditCsv(dataSource: DataSource, query: AuditExportQuery):
   return csvDocument(
     AUDIT_CSV_HEADER,
     rows.map((r) => [r.id, r.at, r.actor, r.actorRoles, r.action, r.targetType, r.targetId, r.beforeJson, r.afterJson, r.requestId, r.prevHash, r.hash]),
+    { verbatim: true },
   );
 }

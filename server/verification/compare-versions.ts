@@ -21,6 +21,18 @@ import { scoreMatch } from "./score-row.ts";
 import { simulatedTriggers, type SimulatedTrigger } from "./simulated-triggers.ts";
 
 const HOUR_MS = 3_600_000;
+/** A run stored more than this long after its initial time was loaded after the fact (an archive). */
+const LIVE_ARRIVAL_LIMIT_MS = 24 * HOUR_MS;
+
+/**
+ * When a simulated trigger would have opened: when its opening frame was stored, if that frame
+ * arrived live; for a run loaded long after the fact, the run's initial time instead (lead times
+ * are then optimistic by the model's delivery delay, which the screen says).
+ */
+export function simulatedOpening(frame: Pick<GridFrameEntity, "createdAt" | "runTime"> | undefined, fallback: string): string {
+  if (!frame) return fallback;
+  return Date.parse(frame.createdAt) - Date.parse(frame.runTime) <= LIVE_ARRIVAL_LIMIT_MS ? frame.createdAt : frame.runTime;
+}
 
 type Backtest = Awaited<ReturnType<RuleMapService["backtest"]>>;
 
@@ -35,7 +47,8 @@ interface Deps {
  * Runs the backtest of each version over the same newest stored runs (notifying no one), rebuilds
  * the triggers each would have opened, and scores both against the same storm reports: those of
  * the chosen kinds inside either version's zones during the simulated valid times (± the window).
- * A simulated trigger "opens" when the frame that opened it was stored, as the live engine would.
+ * A simulated trigger opens when the frame that opened it was stored, as the live engine would
+ * (see simulatedOpening for runs loaded after the fact).
  */
 export async function compareVersions(dataSource: DataSource, deps: Deps, q: CompareQuery, options: MatchingOptionsDto): Promise<VersionComparisonDto> {
   const rule = await deps.rules.find(q.ruleId, true);
@@ -69,7 +82,7 @@ export async function compareVersions(dataSource: DataSource, deps: Deps, q: Com
     const matched = matchReportsToTriggers(
       simulated.map((s, i) => ({
         id: i,
-        openedAt: Date.parse(frameById.get(s.openingFrameId)?.createdAt ?? s.firstValidTime),
+        openedAt: Date.parse(simulatedOpening(frameById.get(s.openingFrameId), s.firstValidTime)),
         firstValidTime: Date.parse(s.firstValidTime),
         lastValidTime: Date.parse(s.lastValidTime),
       })),
@@ -86,7 +99,7 @@ export async function compareVersions(dataSource: DataSource, deps: Deps, q: Com
       triggers: simulated.map((s, i) => ({
         zoneId: s.zoneId,
         zoneCode: zones.find((z) => z.id === s.zoneId)?.code ?? "?",
-        openedAt: frameById.get(s.openingFrameId)?.createdAt ?? s.firstValidTime,
+        openedAt: simulatedOpening(frameById.get(s.openingFrameId), s.firstValidTime),
         firstValidTime: s.firstValidTime,
         lastValidTime: s.lastValidTime,
         verified: matched.triggers[i]!.verified,

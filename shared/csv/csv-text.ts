@@ -85,16 +85,20 @@ export function splitCsvRecords(text: string): CsvRecord[] {
  * Free text that a spreadsheet would read as a formula (starting with =, +, -, @ or a tab) gets a
  * leading apostrophe, so an exported note can never run as one; numbers are written as numbers.
  */
-export function csvCell(value: string | number | boolean | null | undefined): string {
+export function csvCell(value: string | number | boolean | null | undefined, verbatim = false): string {
   if (value === null || value === undefined) return "";
   if (typeof value === "number") return Number.isFinite(value) ? String(value) : "";
-  const text = typeof value === "string" && /^[=+\-@\t\r]/.test(value) ? `'${value}` : String(value);
+  const text = !verbatim && typeof value === "string" && /^[=+\-@\t\r]/.test(value) ? `'${value}` : String(value);
   return /[",\r\n]/.test(text) ? `"${text.replace(/"/g, '""')}"` : text;
 }
 
-/** A whole CSV document: header row, then rows, CRLF line ends (RFC 4180). */
-export function csvDocument(header: readonly string[], rows: Iterable<readonly (string | number | boolean | null | undefined)[]>): string {
-  const lines = [header.map(csvCell).join(",")];
-  for (const row of rows) lines.push(row.map(csvCell).join(","));
+/**
+ * A whole CSV document: header row, then rows, CRLF line ends (RFC 4180). `verbatim` writes text
+ * exactly as stored (no formula guard), for exports whose cells must be re-checked byte for byte.
+ */
+export function csvDocument(header: readonly string[], rows: Iterable<readonly (string | number | boolean | null | undefined)[]>, options: { verbatim?: boolean } = {}): string {
+  const cell = (value: string | number | boolean | null | undefined) => csvCell(value, options.verbatim);
+  const lines = [header.map(cell).join(",")];
+  for (const row of rows) lines.push(row.map(cell).join(","));
   return `${lines.join("\r\n")}\r\n`;
 }
