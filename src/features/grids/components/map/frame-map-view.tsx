@@ -30,6 +30,7 @@ import { mapViewFromSearch, searchFromMapView, type MapViewSettings } from "../.
 import { FrameStepper, neighbourFrames } from "./frame-stepper.tsx";
 import { GridFacts } from "./grid-facts.tsx";
 import { DEFAULT_OVERLAYS, MAP_OVERLAYS, type OverlayContext } from "./map-overlays.tsx";
+import { OverlayGroupLegends, OverlayToggles } from "./overlay-toggles.tsx";
 
 const OVERLAY_IDS = MAP_OVERLAYS.map((overlay) => overlay.id);
 
@@ -92,6 +93,7 @@ export function FrameMapView({ frame }: { frame: MapFrame }) {
         )}
         <MapReadout field={field} values={values.data ?? null} point={point} />
         {field && scale && <MapLegend field={field} scale={scale} missingCount={info?.nanCount ?? 0} />}
+        <OverlayGroupLegends context={overlayContext} selected={settings.overlays} />
       </div>
 
       <aside className="flex w-full shrink-0 flex-col gap-3 xl:w-80">
@@ -111,25 +113,7 @@ export function FrameMapView({ frame }: { frame: MapFrame }) {
           )}
         </Panel>
         <Panel title="Layers">
-          <fieldset className="flex flex-col gap-1.5">
-            <legend className="sr-only">Layers over the field</legend>
-            {MAP_OVERLAYS.map((overlay) => {
-              const reason = overlay.unavailableReason?.(overlayContext) ?? null;
-              const checked = settings.overlays.includes(overlay.id);
-              return (
-                <label key={overlay.id} className="flex items-center gap-2">
-                  <input
-                    type="checkbox"
-                    checked={checked}
-                    disabled={reason !== null}
-                    onChange={() => update({ overlays: checked ? settings.overlays.filter((id) => id !== overlay.id) : [...settings.overlays, overlay.id] })}
-                  />
-                  <span className={reason ? "text-muted" : ""}>{overlay.label}</span>
-                  {reason && <span className="text-xs text-muted">({reason})</span>}
-                </label>
-              );
-            })}
-          </fieldset>
+          <OverlayToggles context={overlayContext} selected={settings.overlays} onChange={(overlays) => update({ overlays })} />
         </Panel>
         <GridFacts frame={frame} />
       </aside>

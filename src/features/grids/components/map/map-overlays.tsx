@@ -1,6 +1,7 @@
 import type { ReactNode } from "react";
 import { ContoursLayer, OutlinesLayer, type ColourScale, type FieldValues, type MapField } from "@/components/map/index.ts";
 import type { MapFrame } from "../../api/get-frame.ts";
+import { JET_LINE_OVERLAYS, JET_OVERLAY_GROUP, JET_SHADING_OVERLAYS } from "../jet-layers/jet-overlays.tsx";
 
 /** What an overlay may draw from: the frame, and the field shown beneath it (once loaded). */
 export interface OverlayContext {
@@ -11,9 +12,9 @@ export interface OverlayContext {
 }
 
 /**
- * A layer drawn over the field. To add one (isotachs, jet axes, quadrant shading, arrows), write a
- * component that draws through `LayerCanvas` (it gets the map's viewport from `useMapViewport`
- * and can load any other field of the frame with `useFieldValues`), then add one entry here.
+ * A layer drawn over the field. To add one, write a component that draws through `LayerCanvas`
+ * (it gets the map's viewport from `useMapViewport` and can load any other field of the frame
+ * with `useFieldValues`), then add one entry here (with a `group` to list it under a heading).
  * The viewer lists every entry as a toggle and stacks visible ones in this order, above the field.
  */
 export interface MapOverlay {
@@ -23,9 +24,22 @@ export interface MapOverlay {
   /** Why the overlay cannot be drawn right now (shown beside its toggle), or null when it can. */
   unavailableReason?: (context: OverlayContext) => string | null;
   render: (context: OverlayContext) => ReactNode;
+  /** Id of the group (in MAP_OVERLAY_GROUPS) whose toggles and legend this overlay shares. */
+  group?: string;
 }
 
+/** Overlays that belong together: their toggles are listed under one heading, and one legend explains the visible ones. */
+export interface MapOverlayGroup {
+  id: string;
+  label: string;
+  /** Shown below the field's legend while any overlay of the group is visible; `visible` lists the visible overlays' ids. */
+  legend?: (context: OverlayContext, visible: readonly string[]) => ReactNode;
+}
+
+export const MAP_OVERLAY_GROUPS: readonly MapOverlayGroup[] = [JET_OVERLAY_GROUP];
+
 export const MAP_OVERLAYS: readonly MapOverlay[] = [
+  ...JET_SHADING_OVERLAYS,
   {
     id: "contours",
     label: "Contours",
@@ -40,6 +54,7 @@ export const MAP_OVERLAYS: readonly MapOverlay[] = [
     visibleByDefault: true,
     render: () => <OutlinesLayer />,
   },
+  ...JET_LINE_OVERLAYS,
 ];
 
 /** Overlay ids shown when the URL does not say. */

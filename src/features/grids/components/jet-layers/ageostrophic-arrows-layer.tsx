@@ -1,0 +1,67 @@
+import { useCallback, useMemo } from "react";
+import { LayerCanvas, useMapViewport, type DrawLayer } from "@/components/map/index.ts";
+import type { MapFrame } from "../../api/get-frame.ts";
+import { ageostrophicArrows, type ArrowSamples } from "../../jet-layers/ageostrophic-arrows.ts";
+import { JET_COLOURS } from "./jet-palette.ts";
+import { useAgeostrophicWind } from "./use-arrow-scale.ts";
+
+/** Arrows shorter than this (CSS pixels) are drawn as a dot: their direction could not be read. */
+const SHORTEST_ARROW_PX = 3;
+
+/** Adds one arrow centred on (x, y) to the path: shaft and an open head. */
+function addArrow(context: CanvasRenderingContext2D, x: number, y: number, dirX: number, dirY: number, length: number) {
+  const half = length / 2;
+  const tipX = x + dirX * half;
+  const tipY = y + dirY * half;
+  context.moveTo(x - dirX * half, y - dirY * half);
+  context.lineTo(tipX, tipY);
+  const head = Math.min(6, Math.max(3, length * 0.35));
+  // The head's two barbs, 28° either side of the shaft.
+  const c = Math.cos(0.49);
+  const s = Math.sin(0.49);
+  context.moveTo(tipX - head * (dirX * c - dirY * s), tipY - head * (dirY * c + dirX * s));
+  context.lineTo(tipX, tipY);
+  context.lineTo(tipX - head * (dirX * c + dirY * s), tipY - head * (dirY * c - dirX * s));
+}
+
+function addArrows(context: CanvasRenderingContext2D, samples: ArrowSamples, pixelsPerMetrePerSecond: number) {
+  for (let k = 0; k < samples.count; k++) {
+    const length = samples.speed[k]! * pixelsPerMetrePerSecond;
+    if (length < SHORTEST_ARROW_PX) {
+      context.moveTo(samples.x[k]! + 1, samples.y[k]!);
+      context.arc(samples.x[k]!, samples.y[k]!, 1, 0, 2 * Math.PI);
+    } else {
+      addArrow(context, samples.x[k]!, samples.y[k]!, samples.dirX[k]!, samples.dirY[k]!, length);
+    }
+  }
+}
+
+/**
+ * The ageostrophic wind at the jet level (`jet_uag`, `jet_vag`) as arrows, thinned to a readable
+ * density, turned from east/north into the map's own directions, and scaled to the key arrow the
+ * legend shows.
+ */
+export function AgeostrophicArrowsLayer({ frame }: { frame: MapFrame }) {
+  const { geometry, transform } = useMapViewport();
+  const { u, v, scale } = useAgeostrophicWind(frame);
+  const samples = useMemo(() => (u && v ? ageostrophicArrows(u.values, v.values, geometry, transform) : null), [u, v, geometry, transform]);
+  const draw = useCallback<DrawLayer>(
+    (context) => {
+      if (!samples || !scale) return;
+      context.lineJoin = "round";
+      context.lineCap = "round";
+      for (const [lineWidth, colour] of [
+        [3.2, JET_COLOURS.halo],
+        [1.3, JET_COLOURS.arrow],
+      ] as const) {
+        context.lineWidth = lineWidth;
+        context.strokeStyle = colour;
+        context.beginPath();
+        addArrows(context, samples, scale.pixelsPerMetrePerSecond);
+        context.stroke();
+      }
+    },
+    [samples, scale],
+  );
+  return <LayerCanvas draw={draw} label="jet-ageostrophic-arrows" />;
+}
