@@ -5,7 +5,9 @@ import type { CreateRuleInput } from "../../shared/api/rules.ts";
  * ingredients (deep-layer shear ≥ 20 m/s, MLCAPE ≥ 1000 J/kg, low-level SRH ≥ 100 m²/s², low LCLs,
  * steep mid-level lapse rates). The office is invented; these are examples to tune, not guidance.
  */
-export function demoRules(zoneIds: readonly number[]): CreateRuleInput[] {
+export function demoRules(zoneIds: readonly number[], options: { partnerGroupId?: number } = {}): CreateRuleInput[] {
+  // The invented partners hear about the two strongest signals, besides whoever is on shift.
+  const withPartners = { onCall: true, contactIds: [], groupIds: options.partnerGroupId ? [options.partnerGroupId] : [] };
   const rule = (fields: Pick<CreateRuleInput, "name" | "description" | "expression" | "severity" | "spatialCondition"> & Partial<CreateRuleInput>): CreateRuleInput => ({
     zoneIds: [...zoneIds],
     validTimeWindow: { kind: "any-time" },
@@ -22,6 +24,7 @@ export function demoRules(zoneIds: readonly number[]): CreateRuleInput[] {
       expression: "mlcape >= 1000 and shear_0_6km >= 20 and mlcin > -50",
       severity: "serious",
       spatialCondition: { kind: "min-coverage", percent: 10 },
+      recipients: withPartners,
     }),
     rule({
       name: "Tornado-favourable low levels",
@@ -30,6 +33,9 @@ export function demoRules(zoneIds: readonly number[]): CreateRuleInput[] {
       severity: "urgent",
       spatialCondition: { kind: "min-points", points: 3 },
       persistenceFrames: 2,
+      recipients: withPartners,
+      // Urgent: escalate sooner than the office default.
+      escalateAfterMinutes: 10,
     }),
     rule({
       name: "Steep lapse rates over rich moisture",

@@ -6,6 +6,7 @@ import { hashPassword } from "../auth/password.ts";
 import { DEMO_ACCOUNTS } from "./demo-staff.ts";
 import { demoZones } from "./demo-zones.ts";
 import { demoRules } from "./demo-rules.ts";
+import { seedDemoContacts } from "./demo-contacts.ts";
 import { seedDemoStormReports } from "./demo-storm-reports.ts";
 import type { Services } from "../services/container.ts";
 import type { Role } from "../../shared/auth/permissions.ts";
@@ -49,8 +50,9 @@ export async function seedFirstAdmin(dataSource: DataSource, username: string, p
 }
 
 /** The invented office's zones and starter rules (the demo run itself arrives through the inbox). */
-export async function seedDemoOffice(services: Pick<Services, "zones" | "rules" | "stormReports">): Promise<void> {
+export async function seedDemoOffice(services: Pick<Services, "zones" | "rules" | "stormReports" | "notify" | "dataSource">): Promise<void> {
   const zones = await services.zones.importMany(SYSTEM_ACTOR, demoZones());
-  for (const rule of demoRules(zones.map((z) => z.id))) await services.rules.create(SYSTEM_ACTOR, rule);
+  const { partnerGroupId } = await seedDemoContacts(services.notify, services.dataSource, services.notify.now());
+  for (const rule of demoRules(zones.map((z) => z.id), { partnerGroupId })) await services.rules.create(SYSTEM_ACTOR, rule);
   await seedDemoStormReports(services.stormReports);
 }

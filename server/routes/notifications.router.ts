@@ -9,6 +9,10 @@ import { writeTransaction } from "../db/data-source.ts";
 import type { NotifyServices } from "../notify/notify-module.ts";
 import type { AppConfig } from "../config.ts";
 import type { DataSource } from "typeorm";
+import { z } from "zod";
+import { NotFoundError } from "../errors.ts";
+
+const attachmentParams = z.object({ index: z.coerce.number().int().min(0).max(50) });
 
 function contactsRouter(notify: NotifyServices, table: RouteEntry[]): Router {
   const router = Router();
@@ -117,6 +121,15 @@ function fakesRouter(notify: NotifyServices, dataSource: DataSource, now: () => 
   });
   routes.get("/mail", "fakes.read", async (_req, res) => {
     res.json(notify.fakes.mail.list());
+  });
+  // One attachment of a stored e-mail (the map image), so the fakes page can show it.
+  routes.get("/mail/:id/attachments/:index", "fakes.read", async (req, res) => {
+    const { id } = parseInput(idParams, req.params, "params");
+    const { index } = parseInput(attachmentParams, req.params, "params");
+    const mail = notify.fakes.mail.list().find((m) => m.id === id);
+    const content = mail ? notify.fakes.mail.attachment(id, index) : null;
+    if (!mail || !content) throw new NotFoundError(`Attachment ${index} of fake mail ${id}`);
+    res.type(mail.attachments[index]!.contentType).send(content);
   });
   routes.get("/sms", "fakes.read", async (_req, res) => {
     res.json(notify.fakes.sms.list());

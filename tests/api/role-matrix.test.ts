@@ -5,7 +5,7 @@ import { startTestServer, signIn, anonymous, ingestBytes, insertOpenTrigger, DEM
 import { fakeGribBytes, syntheticRecords } from "../helpers/synthetic-grid.ts";
 import { SYSTEM_ACTOR } from "../../server/audit/audit-log.ts";
 import { DEFAULT_TEMPLATES } from "../../shared/api/notifications.ts";
-import { insertNotification, makeContact, makeGroup, makeShift } from "../helpers/notify-fixtures.ts";
+import { deliverFakeMail, insertNotification, makeContact, makeGroup, makeShift } from "../helpers/notify-fixtures.ts";
 import { testRule } from "../helpers/rule-builder.ts";
 import type { HttpMethod, RouteEntry } from "../../server/http/route-table.ts";
 
@@ -106,6 +106,7 @@ const EXAMPLES: Record<string, Example> = {
   "get /api/fakes/": { path: "/api/fakes" },
   "get /api/fakes/mail": { path: "/api/fakes/mail" },
   "get /api/fakes/sms": { path: "/api/fakes/sms" },
+  "get /api/fakes/mail/:id/attachments/:index": { path: "", prepare: async () => `/api/fakes/mail/${await deliverFakeMail(server)}/attachments/0` },
   "put /api/fakes/behaviour": { path: "/api/fakes/behaviour", body: () => ({ mail: { delayMs: 0 }, sms: { failureRate: 0 } }) },
   "delete /api/fakes/messages": { path: "/api/fakes/messages" },
   "delete /api/zones/:id": {

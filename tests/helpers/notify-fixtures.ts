@@ -48,3 +48,15 @@ export async function insertNotification(server: Pick<TestServer, "dataSource">,
   });
   return row.id;
 }
+
+/** One e-mail with a small PNG attachment, sent with nodemailer into the server's mail fake (started if needed); returns its id there. */
+export async function deliverFakeMail(server: Pick<TestServer, "services">): Promise<number> {
+  const { createMailSender } = await import("../../server/notify/channels/mail-sender.ts");
+  const fake = server.services.notify.fakes.mail;
+  const port = await fake.start();
+  const sender = createMailSender({ host: "127.0.0.1", port, secure: false, from: "fixture@example.test", plainText: true }, "fake");
+  const png = Buffer.from("89504e470d0a1a0a", "hex");
+  await sender.send({ to: "fixture@example.test", subject: "Fixture", text: "t", html: "<p>t</p>", attachments: [{ filename: "map.png", content: png, contentType: "image/png" }], messageId: `<fixture-${++made}@example.test>`, triggerIds: [] });
+  await sender.close();
+  return fake.list()[0]!.id;
+}

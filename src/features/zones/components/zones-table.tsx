@@ -49,9 +49,10 @@ const columns = column.columns([
     cell: (info) =>
       info.getValue() ? (
         <Chip tone="danger">Covers no grid point</Chip>
+      ) : info.row.original.coverage.length === 0 ? (
+        <Chip>Not checked yet</Chip>
       ) : (
-        // Only the problem is coloured; a zone that is fine stays quiet.
-        <span className="text-xs text-muted">{info.row.original.coverage.length === 0 ? "Not checked yet" : "Covers points"}</span>
+        <Chip tone="ok">Covers points</Chip>
       ),
   }),
   column.accessor("updatedAt", { header: "Shape changed", cell: (info) => <Timestamp value={info.getValue()} /> }),
