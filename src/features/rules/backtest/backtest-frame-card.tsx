@@ -10,7 +10,8 @@ import type { ZoneOption } from "../editor/rule-editor-types.ts";
 
 type BacktestFrame = BacktestDto["frames"][number];
 
-const DECISION_WORDS: Record<string, string> = { open: "would open", extend: "extends", retract: "retracts", none: "" };
+/** What the trigger logic did with the frame, in one short word (the card's legend explains them). */
+const DECISION_WORDS: Record<string, string> = { open: "opens", extend: "extends", retract: "retracts", none: "" };
 
 /** One frame of a backtest: its valid time and run, a small map of the matched area in the rule's zones, and each zone's outcome. */
 export function BacktestFrameCard({ frame, geometry, zones, outlines }: { frame: BacktestFrame; geometry: GridGeometry | null; zones: ReadonlyMap<number, ZoneOption>; outlines: readonly ZoneGeometry[] }) {
@@ -25,10 +26,10 @@ export function BacktestFrameCard({ frame, geometry, zones, outlines }: { frame:
       aria-label={`Valid ${formatUtcDateTime(frame.frame.validTime)}, run ${formatUtcCycle(frame.frame.runTime)}`}
       className={`flex flex-col gap-1.5 rounded-md border bg-surface p-2 ${opens.length ? "border-accent/70" : "border-line"}`}
     >
-      <header className="flex items-baseline justify-between gap-2">
-        <span className="font-mono text-xs font-medium">{formatUtcDateTime(frame.frame.validTime)}</span>
-        <span className="font-mono text-[11px] text-muted">
-          {formatUtcCycle(frame.frame.runTime)} F{String(frame.frame.forecastHour).padStart(2, "0")}
+      <header className="flex flex-col font-mono">
+        <span className="text-xs font-medium">valid {formatUtcDateTime(frame.frame.validTime)}</span>
+        <span className="text-[11px] text-muted">
+          run {formatUtcCycle(frame.frame.runTime)} · F{String(frame.frame.forecastHour).padStart(2, "0")}
         </span>
       </header>
       {geometry && (
@@ -48,9 +49,8 @@ export function BacktestFrameCard({ frame, geometry, zones, outlines }: { frame:
               z.decision === "open" ? "border-accent bg-accent/20 text-accent" : z.met ? "border-ok/50 bg-ok/10 text-ok" : "border-line text-muted"
             }`}
           >
-            {zones.get(z.zoneId)?.code ?? `#${z.zoneId}`} {z.met ? "met" : "—"}
-            {z.coveragePercent !== null && z.met ? ` ${formatNumber(z.coveragePercent, 0)} %` : ""}
-            {DECISION_WORDS[z.decision] ? ` · ${DECISION_WORDS[z.decision]}` : ""}
+            {zones.get(z.zoneId)?.code ?? `#${z.zoneId}`} {z.met ? (z.coveragePercent === null ? "met" : `${formatNumber(z.coveragePercent, 0)}%`) : "—"}
+            {DECISION_WORDS[z.decision] ? ` ${DECISION_WORDS[z.decision]}` : ""}
           </li>
         ))}
       </ul>

@@ -50,7 +50,7 @@ export function RuleBacktestPage({ ruleId, zones }: { ruleId: number; zones: rea
               if (parsed.success) backtest.mutate({ ruleId, input: parsed.data });
             }}
           >
-            <SelectField label="Version" value={chosen ?? ""} onChange={(e) => setVersionId(Number(e.target.value))} className="w-64">
+            <SelectField label="Version" value={chosen ?? ""} onChange={(e) => setVersionId(Number(e.target.value))} className="w-80">
               {(versions.data ?? []).map((v) => (
                 <option key={v.id} value={v.id}>
                   v{v.version} · {formatUtcDateTime(v.createdAt)} · {v.createdBy ?? "system"}
@@ -94,8 +94,8 @@ function BacktestResult({ result, zones, definition }: { result: BacktestDto; zo
     <div className="flex flex-col gap-3">
       <Panel title={`Version ${result.version}: would have opened ${formatCount(result.wouldOpen, "trigger")}`}>
         <p className="text-muted">
-          Over {formatCount(result.frames.length, "frame")} of {formatCount(runCount, "run")}
-          {definition ? `, with persistence of ${describePersistence(definition.persistenceFrames)} and a cool-down of ${describeCoolDown(definition.coolDownHours)}` : ""}.
+          Over {formatCount(result.frames.length, "frame")} of {formatCount(runCount, "run")}.
+          {definition && ` Persistence: ${describePersistence(definition.persistenceFrames)}. Cool-down: ${describeCoolDown(definition.coolDownHours)}.`}
         </p>
         {result.opened.length > 0 && (
           <ul className="mt-2 flex flex-col gap-0.5" aria-label="Triggers it would have opened">
@@ -107,6 +107,10 @@ function BacktestResult({ result, zones, definition }: { result: BacktestDto; zo
           </ul>
         )}
       </Panel>
+      <p className="text-xs text-muted">
+        Each card is one stored frame: hatched, where the rule held inside its zones. Per zone: the coverage where the spatial condition was
+        met (— where not), and <span className="text-accent">opens</span> where a trigger would have opened.
+      </p>
       <section aria-label="Frames" className="grid grid-cols-[repeat(auto-fill,minmax(15rem,1fr))] gap-2">
         {result.frames.map((frame) => (
           <BacktestFrameCard key={frame.frame.id} frame={frame} geometry={result.geometry} zones={zoneById} outlines={outlines} />

@@ -3,6 +3,7 @@ import { Controller, useForm, useWatch, type FieldPath, type UseFormRegisterRetu
 import { zodResolver } from "@hookform/resolvers/zod";
 import { checkExpression, updateRuleInput, type RuleDto, type UpdateRuleInput } from "@shared/api/rules.ts";
 import { Button } from "@/components/ui/button.tsx";
+import { useDebouncedValue } from "@/hooks/use-debounced-value.ts";
 import { Notice } from "@/components/ui/notice.tsx";
 import { Panel } from "@/components/ui/panel.tsx";
 import { TextField } from "@/components/ui/text-field.tsx";
@@ -20,6 +21,8 @@ import { SeverityPicker } from "./severity-picker.tsx";
 import { SpatialConditionFields } from "./spatial-condition-fields.tsx";
 import { ValidTimeWindowFields } from "./valid-time-window-fields.tsx";
 import { ZonePicker } from "./zone-picker.tsx";
+
+const PROBLEM_DELAY_MS = 400;
 
 export interface RuleEditorFormProps {
   /** The rule being edited, or null for a new one. */
@@ -47,7 +50,9 @@ export function RuleEditorForm({ rule, canEdit, zones, recipients, saving, saveE
   const zoneIds = useWatch({ control: form.control, name: "zoneIds" });
   const spatialCondition = useWatch({ control: form.control, name: "spatialCondition" });
   const check = useMemo(() => checkExpression(expression), [expression]);
-  const problems = check.ok ? [] : check.errors;
+  // Problems are shown once typing pauses, so a half-typed name is not flagged at every keystroke.
+  const settledExpression = useDebouncedValue(expression, PROBLEM_DELAY_MS);
+  const problems = check.ok || settledExpression !== expression ? [] : check.errors;
   const serverErrors = fieldErrorsFromApiError(saveError);
   const disabled = !canEdit;
 

@@ -4,17 +4,19 @@ function Words({ parts }: { parts: readonly WordDiffPart[] }) {
   return (
     <code className="block font-mono text-sm leading-7 break-words whitespace-pre-wrap">
       {parts.map((part, k) => {
-        const text = `${k > 0 ? " " : ""}${part.text}`;
-        if (part.kind === "same") return <span key={k}>{text}</span>;
+        const gap = k > 0 ? " " : "";
+        if (part.kind === "same") return <span key={k}>{`${gap}${part.text}`}</span>;
         const Tag = part.kind === "added" ? "ins" : "del";
         return (
-          <Tag
-            key={k}
-            className={part.kind === "added" ? "rounded-sm bg-ok/20 text-ok no-underline" : "rounded-sm bg-danger/15 text-danger line-through"}
-            aria-label={`${part.kind === "added" ? "added" : "removed"}: ${part.text}`}
-          >
-            {text}
-          </Tag>
+          <span key={k}>
+            {gap}
+            <Tag
+              className={part.kind === "added" ? "rounded-sm bg-ok/20 px-0.5 text-ok no-underline" : "rounded-sm bg-danger/15 px-0.5 text-danger line-through"}
+              aria-label={`${part.kind === "added" ? "added" : "removed"}: ${part.text}`}
+            >
+              {part.text}
+            </Tag>
+          </span>
         );
       })}
     </code>

@@ -49,10 +49,9 @@ const columns = column.columns([
     cell: (info) =>
       info.getValue() ? (
         <Chip tone="danger">Covers no grid point</Chip>
-      ) : info.row.original.coverage.length === 0 ? (
-        <Chip>Not checked yet</Chip>
       ) : (
-        <Chip tone="ok">Covers points</Chip>
+        // Only the problem is coloured; a zone that is fine stays quiet.
+        <span className="text-xs text-muted">{info.row.original.coverage.length === 0 ? "Not checked yet" : "Covers points"}</span>
       ),
   }),
   column.accessor("updatedAt", { header: "Shape changed", cell: (info) => <Timestamp value={info.getValue()} /> }),
