@@ -124,6 +124,9 @@ describe("rules and zones in a real browser", () => {
     const expression = lead.getByRole("combobox", { name: "Expression" });
     await expression.fill("mlcape >= 1500 and shear_0_6km >= 20");
     await lead.getByRole("radio", { name: "Urgent" }).check();
+    // Recipients come from the office's contact lists (the demo office has a partner group).
+    const groups = lead.getByRole("group", { name: "Contact groups" });
+    await groups.getByRole("checkbox").first().check();
     await lead.getByLabel("Change note").fill("Raise the buoyancy threshold");
     await lead.getByRole("button", { name: "Save as version 2" }).click();
     await lead.getByText(/Version 2, saved/).waitFor();
@@ -137,6 +140,7 @@ describe("rules and zones in a real browser", () => {
     expect(await changes.locator("ins", { hasText: "1500" }).count()).toBe(1);
     expect(await changes.getByText("Heads-up").count()).toBe(1);
     expect(await changes.getByText("Urgent").count()).toBe(1);
+    expect(await changes.getByText("Recipients").count()).toBe(1);
     await screenshot(lead, "rule-history");
   });
 
@@ -225,7 +229,7 @@ describe("rules and zones in a real browser", () => {
     await lead.mouse.click(crossing.x, crossing.y);
     await lead.getByText(/the ring crosses itself/).waitFor();
     await screenshot(lead, "zones-draw-crossing");
-    await lead.keyboard.press("Backspace");
+    await map.press("Backspace");
     await expect.poll(() => lead.getByText(/the ring crosses itself/).count()).toBe(0);
     const last = at(0.3, 0.6);
     await lead.mouse.dblclick(last.x, last.y);

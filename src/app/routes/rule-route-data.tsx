@@ -1,10 +1,13 @@
 import type { ReactNode } from "react";
 import { useParams } from "react-router-dom";
 import type { ZoneDto } from "@shared/api/zones.ts";
+import { can } from "@shared/auth/permissions.ts";
 import { Loading } from "@/components/ui/loading.tsx";
 import { Notice } from "@/components/ui/notice.tsx";
 import type { RecipientOptions, ZoneOption } from "@/features/rules/editor/rule-editor-types.ts";
+import { useRecipientOptions } from "@/features/rules/api/get-recipient-options.ts";
 import { useZones } from "@/features/zones/api/get-zones.ts";
+import { useSignedInUser } from "@/lib/auth.ts";
 import { describeError } from "@/lib/describe-error.ts";
 
 /**
@@ -27,8 +30,11 @@ export function WithZones({ children }: { children: (zones: ZoneOption[]) => Rea
   return <>{children(zones.data.map(toZoneOption))}</>;
 }
 
-// TODO(issue 7): fill from the contacts and contact-group lists once the notifications API serves them.
-export const RECIPIENT_OPTIONS: RecipientOptions = { contacts: null, groups: null };
+/** The contacts and groups a rule may notify, for roles allowed to read them. */
+export function useRuleRecipientOptions(): RecipientOptions {
+  const user = useSignedInUser();
+  return useRecipientOptions(can(user.roles, "contacts.read"));
+}
 
 /** The `:ruleId` of the URL as a positive whole number, or null. */
 export function useRuleIdParam(): number | null {

@@ -11,7 +11,7 @@ import { describeError } from "@/lib/describe-error.ts";
 import { formatCount } from "@/lib/format-units.ts";
 import { useRule } from "../api/get-rule.ts";
 import { useRuleVersions } from "../api/get-rule-versions.ts";
-import { zoneLabelFor, type ZoneOption } from "../editor/rule-editor-types.ts";
+import { recipientNamesFor, zoneLabelFor, type RecipientOptions, type ZoneOption } from "../editor/rule-editor-types.ts";
 import { diffDefinitions } from "../history/version-diff.ts";
 import { VersionDiffView } from "../history/version-diff-view.tsx";
 
@@ -23,7 +23,7 @@ function chosenPair(versions: readonly RuleVersionDto[], search: URLSearchParams
 }
 
 /** Every saved version of a rule (who, when, why), and the difference between any two. */
-export function RuleHistoryPage({ ruleId, zones }: { ruleId: number; zones: readonly ZoneOption[] }) {
+export function RuleHistoryPage({ ruleId, zones, recipients }: { ruleId: number; zones: readonly ZoneOption[]; recipients: RecipientOptions }) {
   const rule = useRule(ruleId);
   const versions = useRuleVersions(ruleId);
   const [search, setSearch] = useSearchParams();
@@ -60,7 +60,7 @@ export function RuleHistoryPage({ ruleId, zones }: { ruleId: number; zones: read
           <SectionBoundary label="the differences">
             {pair ? (
               <Panel title={`Changes from version ${pair.from.version} to version ${pair.to.version}`}>
-                <VersionDiffView changes={diffDefinitions(pair.from.definition, pair.to.definition, zoneLabelFor(zones))} />
+                <VersionDiffView changes={diffDefinitions(pair.from.definition, pair.to.definition, zoneLabelFor(zones), recipientNamesFor(recipients))} />
               </Panel>
             ) : (
               <Notice title="Only one version so far">Differences appear once the rule has been saved again.</Notice>

@@ -44,11 +44,14 @@ function parseIds(text: string): { ids: number[]; bad: string[] } {
 
 function OptionChecks({ legend, options, value, onChange, disabled }: { legend: string; options: readonly RecipientOption[]; value: readonly number[]; onChange: (ids: number[]) => void; disabled?: boolean }) {
   const chosen = new Set(value);
+  // A stored id that is no longer listed stays visible (and can be unticked) rather than silently kept.
+  const listed = new Set(options.map((o) => o.id));
+  const shown = [...options, ...value.filter((id) => !listed.has(id)).map((id) => ({ id, label: `#${id} (no longer listed)` }))];
   return (
     <fieldset className="flex flex-col gap-1">
       <legend className="mb-1 text-xs font-medium text-muted">{legend}</legend>
-      {options.length === 0 && <p className="text-xs text-muted">None set up yet.</p>}
-      {options.map((o) => (
+      {shown.length === 0 && <p className="text-xs text-muted">None set up yet.</p>}
+      {shown.map((o) => (
         <label key={o.id} className="flex items-center gap-2">
           <input type="checkbox" checked={chosen.has(o.id)} disabled={disabled} onChange={() => onChange(chosen.has(o.id) ? value.filter((v) => v !== o.id) : [...value, o.id])} />
           {o.label}
@@ -59,8 +62,8 @@ function OptionChecks({ legend, options, value, onChange, disabled }: { legend: 
 }
 
 /**
- * Who hears about a trigger: the forecaster on call, named contacts and contact groups. Where the
- * contact lists cannot be looked up yet, ids are typed in.
+ * Who hears about a trigger: the forecaster on call, named contacts and contact groups, picked
+ * from the office's lists. Roles that cannot read those lists see (and could type) the ids.
  */
 export function RecipientsFields({
   value,
@@ -87,13 +90,12 @@ export function RecipientsFields({
         {contacts ? (
           <OptionChecks legend="Contacts" options={contacts} value={value.contactIds} disabled={disabled} onChange={(contactIds) => onChange({ ...value, contactIds })} />
         ) : (
-          // TODO(issue 7): offer a contact picker once the contacts API is served.
+          // Roles that cannot read the contact list see the stored ids.
           <IdListField label="Contact ids" value={value.contactIds} disabled={disabled} error={errors.contactIds} onChange={(contactIds) => onChange({ ...value, contactIds })} />
         )}
         {groups ? (
           <OptionChecks legend="Contact groups" options={groups} value={value.groupIds} disabled={disabled} onChange={(groupIds) => onChange({ ...value, groupIds })} />
         ) : (
-          // TODO(issue 7): offer a group picker once the contact groups API is served.
           <IdListField label="Contact group ids" value={value.groupIds} disabled={disabled} error={errors.groupIds} onChange={(groupIds) => onChange({ ...value, groupIds })} />
         )}
       </div>

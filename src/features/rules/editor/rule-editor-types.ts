@@ -28,3 +28,13 @@ export function zoneLabelFor(zones: readonly ZoneOption[]): (id: number) => stri
     return zone ? `${zone.code} ${zone.name}` : `zone ${id} (archived)`;
   };
 }
+
+/** Names for contact and group ids in descriptions ("Partners · 2 contacts"), where the lists are known. */
+export function recipientNamesFor(options: RecipientOptions): { contact?: (id: number) => string; group?: (id: number) => string } {
+  const namer = (list: readonly RecipientOption[] | null) => {
+    if (!list) return undefined;
+    const byId = new Map(list.map((o) => [o.id, o.label]));
+    return (id: number) => byId.get(id) ?? `#${id}`;
+  };
+  return { contact: namer(options.contacts), group: namer(options.groups) };
+}

@@ -53,8 +53,8 @@ export function ZonesPage({ canEdit }: { canEdit: boolean }) {
         )}
         {empty.length > 0 && (
           <Notice tone="caution" title="Some zones cover no grid point">
-            {empty.map((z) => z.code).join(", ")} lie outside (or between the points of) at least one stored grid. Rules using them can never fire
-            on that grid.
+            {empty.map((z) => z.code).join(", ")}: no point of at least one stored grid falls inside. Rules using{" "}
+            {empty.length === 1 ? "this zone" : "these zones"} can never fire on that grid.
           </Notice>
         )}
         <SectionBoundary label="the zones table">
