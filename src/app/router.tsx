@@ -107,6 +107,19 @@ export function createAppRouter(queryClient: QueryClient) {
               children: [{ index: true, lazy: () => import("./routes/accounts.tsx") }],
             },
             {
+              path: paths.history,
+              element: <RequirePermission area="history" />,
+              children: [
+                { index: true, lazy: () => import("./routes/history.tsx") },
+                { path: "report", lazy: () => import("./routes/history-report.tsx") },
+              ],
+            },
+            {
+              path: paths.verification,
+              element: <RequirePermission area="verification" />,
+              children: [{ index: true, lazy: () => import("./routes/verification.tsx") }],
+            },
+            {
               path: paths.audit,
               element: <RequirePermission area="audit" />,
               children: [{ index: true, lazy: () => import("./routes/audit.tsx") }],

@@ -23,6 +23,8 @@ export const NAV_ITEMS = [
   { id: "rules", path: paths.rules, label: "Rules", permission: "rules.read", shortcut: "r" },
   { id: "zones", path: paths.zones, label: "Zones", permission: "zones.read", shortcut: "z" },
   { id: "accounts", path: paths.accounts, label: "Accounts", permission: "users.read", shortcut: "a" },
+  { id: "history", path: paths.history, label: "History", permission: "history.read", shortcut: "h" },
+  { id: "verification", path: paths.verification, label: "Verification", permission: "verification.read", shortcut: "v" },
   { id: "audit", path: paths.audit, label: "Audit trail", permission: "audit.read", shortcut: "u" },
 ] as const satisfies readonly NavItem[];
 

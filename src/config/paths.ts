@@ -12,6 +12,9 @@ export const paths = {
   audit: "/audit",
   rules: "/rules",
   zones: "/zones",
+  history: "/history",
+  historyReport: "/history/report",
+  verification: "/verification",
 } as const;
 
 /** The pages of one rule: the editor (read-only for roles that cannot edit), its history and its backtest. */

@@ -8,9 +8,9 @@ describe("navItemsFor", () => {
   // Expected menus follow the permission table in shared/auth/permissions.ts (the project's own policy).
   it("shows each role only what the permission table allows", () => {
     expect(labels(["forecaster"])).toEqual(["Timeline", "Overview", "Grids", "Soundings", "Rules", "Zones"]);
-    expect(labels(["lead", "forecaster"])).toEqual(["Timeline", "Overview", "Grids", "Soundings", "Rules", "Zones"]);
-    expect(labels(["manager"])).toEqual(["Timeline", "Overview", "Grids", "Soundings", "Rules", "Zones", "Audit trail"]);
-    expect(labels(["admin"])).toEqual(["Timeline", "Overview", "Grids", "Soundings", "Rules", "Zones", "Accounts", "Audit trail"]);
+    expect(labels(["lead", "forecaster"])).toEqual(["Timeline", "Overview", "Grids", "Soundings", "Rules", "Zones", "Verification"]);
+    expect(labels(["manager"])).toEqual(["Timeline", "Overview", "Grids", "Soundings", "Rules", "Zones", "History", "Verification", "Audit trail"]);
+    expect(labels(["admin"])).toEqual(["Timeline", "Overview", "Grids", "Soundings", "Rules", "Zones", "Accounts", "History", "Verification", "Audit trail"]);
   });
 
   it("shows nothing to an account without roles", () => {

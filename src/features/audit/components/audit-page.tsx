@@ -11,6 +11,8 @@ import { AUDIT_PAGE_SIZES, auditQueryFromSearch, filtersOf, searchFromAuditQuery
 import { AuditFilters } from "./audit-filters.tsx";
 import { AuditTable } from "./audit-table.tsx";
 import { ChainStatus } from "./chain-status.tsx";
+import { AuditExportLink } from "./audit-export-link.tsx";
+import { ScheduledCheck } from "./scheduled-check.tsx";
 
 export function AuditPage() {
   const [searchParams, setSearchParams] = useSearchParams();
@@ -24,9 +26,11 @@ export function AuditPage() {
       <PageHeader
         title="Audit trail"
         description="Every change made in Bellwether, who made it and when. Entries are chained by hash, so an edit made behind the application's back shows up as a break."
+        actions={<AuditExportLink query={query} />}
       />
       <SectionBoundary label="the chain status">
         <ChainStatus />
+        <ScheduledCheck />
       </SectionBoundary>
       {/* Re-mount the form when the URL's filters change (back button, shared link). */}
       <AuditFilters key={filterKey} value={filtersOf(query)} onApply={(filters) => go(withFilters(query, filters))} />
