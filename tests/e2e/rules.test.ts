@@ -170,6 +170,7 @@ describe("rules and zones in a real browser", () => {
       expect(await page.getByRole("button", { name: /Save/ }).count()).toBe(0);
       expect(await page.getByRole("heading", { name: "Preview on the newest frame" }).count()).toBe(0);
       expect(await page.getByRole("link", { name: "Backtest" }).count()).toBe(0);
+      expect(await page.getByRole("button", { name: "Archive" }).count()).toBe(0);
       expect(await page.getByRole("switch", { name: /is (on|off)/ }).count()).toBe(0);
       await screenshot(page, "rule-read-only-forecaster");
     } finally {

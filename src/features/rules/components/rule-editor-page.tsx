@@ -1,5 +1,7 @@
+import { useState } from "react";
 import { Link, useNavigate } from "react-router-dom";
 import type { RuleDto, UpdateRuleInput } from "@shared/api/rules.ts";
+import { Button } from "@/components/ui/button.tsx";
 import { SectionBoundary } from "@/components/errors/section-boundary.tsx";
 import { Loading } from "@/components/ui/loading.tsx";
 import { Notice } from "@/components/ui/notice.tsx";
@@ -13,6 +15,7 @@ import { useCreateRule, useUpdateRule } from "../api/save-rule.ts";
 import { RuleEditorForm } from "../editor/rule-editor-form.tsx";
 import type { RecipientOptions, ZoneOption } from "../editor/rule-editor-types.ts";
 import { createInputFrom } from "../editor/rule-form-values.ts";
+import { ArchiveRuleDialog } from "./archive-rule-dialog.tsx";
 
 interface Props {
   canEdit: boolean;
@@ -69,6 +72,7 @@ export function RuleEditorPage({ ruleId, ...props }: Props & { ruleId: number })
 function LoadedRule({ rule, canEdit, canBacktest, zones, recipients }: Props & { rule: RuleDto }) {
   const updateRule = useUpdateRule();
   const toast = useToast();
+  const [archiving, setArchiving] = useState(false);
   const save = (values: UpdateRuleInput) =>
     updateRule.mutate(
       { id: rule.id, input: values },
@@ -96,6 +100,11 @@ function LoadedRule({ rule, canEdit, canBacktest, zones, recipients }: Props & {
                 Backtest
               </Link>
             )}
+            {canEdit && (
+              <Button variant="danger" onClick={() => setArchiving(true)}>
+                Archive
+              </Button>
+            )}
           </>
         }
       />
@@ -110,6 +119,7 @@ function LoadedRule({ rule, canEdit, canBacktest, zones, recipients }: Props & {
       <SectionBoundary label="the rule editor">
         <RuleEditorForm rule={rule} canEdit={canEdit} zones={zones} recipients={recipients} saving={updateRule.isPending} saveError={updateRule.error} onSave={save} />
       </SectionBoundary>
+      {archiving && <ArchiveRuleDialog rule={rule} onClose={() => setArchiving(false)} />}
     </>
   );
 }

@@ -3,7 +3,7 @@ import { createColumnHelper, tableFeatures, useTable } from "@tanstack/react-tab
 import type { RuleDto } from "@shared/api/rules.ts";
 import { rulePaths } from "@/config/paths.ts";
 import { Chip } from "@/components/ui/chip.tsx";
-import { DataTableHead } from "@/components/ui/data-table-head.tsx";
+import { DataTable } from "@/components/ui/data-table.tsx";
 import { SeverityChip } from "@/components/ui/severity-chip.tsx";
 import { Timestamp } from "@/components/ui/timestamp.tsx";
 import type { ZoneOption } from "../editor/rule-editor-types.ts";
@@ -76,23 +76,5 @@ const columns = column.columns([
 export function RulesTable({ rules, canEdit, zones }: { rules: RuleDto[]; canEdit: boolean; zones: readonly ZoneOption[] }) {
   const zoneById = new Map(zones.map((z) => [z.id, z]));
   const table = useTable({ features, columns, meta: { canEdit, zoneById }, data: rules, getRowId: (rule) => String(rule.id) });
-  return (
-    <div className="overflow-x-auto rounded-md border border-line bg-surface">
-      <table className="w-full text-left">
-        <caption className="sr-only">Rules</caption>
-        <DataTableHead table={table} />
-        <tbody>
-          {table.getRowModel().rows.map((row) => (
-            <tr key={row.id} className={`border-b border-line last:border-0 ${row.original.enabled ? "" : "text-muted"}`}>
-              {row.getAllCells().map((cell) => (
-                <td key={cell.id} className="px-3 py-1.5 align-top">
-                  <table.FlexRender cell={cell} />
-                </td>
-              ))}
-            </tr>
-          ))}
-        </tbody>
-      </table>
-    </div>
-  );
+  return <DataTable table={table} caption="Rules" rowClassName={(rule) => (rule.enabled ? "" : "text-muted")} />;
 }

@@ -2,7 +2,7 @@ import { createColumnHelper, tableFeatures, useTable } from "@tanstack/react-tab
 import type { ZoneDto } from "@shared/api/zones.ts";
 import { Button } from "@/components/ui/button.tsx";
 import { Chip } from "@/components/ui/chip.tsx";
-import { DataTableHead } from "@/components/ui/data-table-head.tsx";
+import { DataTable } from "@/components/ui/data-table.tsx";
 import { Timestamp } from "@/components/ui/timestamp.tsx";
 import { formatCount } from "@/lib/format-units.ts";
 
@@ -78,23 +78,5 @@ const columns = column.columns([
 
 export function ZonesTable({ zones, canEdit, onAction }: { zones: ZoneDto[] } & TableMeta) {
   const table = useTable({ features, columns, meta: { canEdit, onAction }, data: zones, getRowId: (zone) => String(zone.id) });
-  return (
-    <div className="overflow-x-auto rounded-md border border-line bg-surface">
-      <table className="w-full text-left">
-        <caption className="sr-only">Forecast zones</caption>
-        <DataTableHead table={table} />
-        <tbody>
-          {table.getRowModel().rows.map((row) => (
-            <tr key={row.id} className={`border-b border-line last:border-0 ${row.original.coversNothing ? "bg-danger/5" : ""}`}>
-              {row.getAllCells().map((cell) => (
-                <td key={cell.id} className="px-3 py-1.5 align-top">
-                  <table.FlexRender cell={cell} />
-                </td>
-              ))}
-            </tr>
-          ))}
-        </tbody>
-      </table>
-    </div>
-  );
+  return <DataTable table={table} caption="Forecast zones" rowClassName={(zone) => (zone.coversNothing ? "bg-danger/5" : "")} />;
 }
