@@ -102,6 +102,11 @@ export function createAppRouter(queryClient: QueryClient) {
               children: [{ index: true, lazy: () => import("./routes/zones.tsx") }],
             },
             {
+              path: paths.notifications,
+              element: <RequirePermission area="notifications" />,
+              children: [{ index: true, lazy: () => import("./routes/notifications.tsx") }],
+            },
+            {
               path: paths.accounts,
               element: <RequirePermission area="accounts" />,
               children: [{ index: true, lazy: () => import("./routes/accounts.tsx") }],

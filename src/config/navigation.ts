@@ -22,6 +22,7 @@ export const NAV_ITEMS = [
   { id: "soundings", path: paths.soundings, label: "Soundings", permission: "soundings.diagnose", shortcut: "s" },
   { id: "rules", path: paths.rules, label: "Rules", permission: "rules.read", shortcut: "r" },
   { id: "zones", path: paths.zones, label: "Zones", permission: "zones.read", shortcut: "z" },
+  { id: "notifications", path: paths.notifications, label: "Notifications", permission: "oncall.read", shortcut: "n" },
   { id: "accounts", path: paths.accounts, label: "Accounts", permission: "users.read", shortcut: "a" },
   { id: "history", path: paths.history, label: "History", permission: "history.read", shortcut: "h" },
   { id: "verification", path: paths.verification, label: "Verification", permission: "verification.read", shortcut: "v" },

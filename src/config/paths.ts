@@ -12,6 +12,7 @@ export const paths = {
   audit: "/audit",
   rules: "/rules",
   zones: "/zones",
+  notifications: "/notifications",
   history: "/history",
   historyReport: "/history/report",
   verification: "/verification",

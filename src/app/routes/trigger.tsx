@@ -2,6 +2,7 @@ import { useParams } from "react-router-dom";
 import { can } from "@shared/auth/permissions.ts";
 import { NotFound } from "@/components/errors/not-found.tsx";
 import { TriggerPage } from "@/features/triggers/components/trigger-page.tsx";
+import { TriggerDeliveries } from "@/features/notifications/components/trigger-deliveries.tsx";
 import { useSignedInUser } from "@/lib/auth.ts";
 
 /** Lazy route module: the page of one trigger, `/triggers/:triggerId`. */
@@ -15,6 +16,5 @@ export function Component() {
     canComment: can(user.roles, "triggers.comment"),
     canClose: can(user.roles, "triggers.close"),
   };
-  // TODO(issue 7): pass deliveries={<TriggerDeliveries triggerId={id} />} from src/features/notifications/components/trigger-deliveries.tsx once it exists.
-  return <TriggerPage key={id} triggerId={id} permissions={permissions} />;
+  return <TriggerPage key={id} triggerId={id} permissions={permissions} deliveries={<TriggerDeliveries triggerId={id} />} />;
 }

@@ -7,10 +7,10 @@ const labels = (roles: Parameters<typeof navItemsFor>[0]) => navItemsFor(roles).
 describe("navItemsFor", () => {
   // Expected menus follow the permission table in shared/auth/permissions.ts (the project's own policy).
   it("shows each role only what the permission table allows", () => {
-    expect(labels(["forecaster"])).toEqual(["Timeline", "Overview", "Grids", "Soundings", "Rules", "Zones"]);
-    expect(labels(["lead", "forecaster"])).toEqual(["Timeline", "Overview", "Grids", "Soundings", "Rules", "Zones", "Verification"]);
-    expect(labels(["manager"])).toEqual(["Timeline", "Overview", "Grids", "Soundings", "Rules", "Zones", "History", "Verification", "Audit trail"]);
-    expect(labels(["admin"])).toEqual(["Timeline", "Overview", "Grids", "Soundings", "Rules", "Zones", "Accounts", "History", "Verification", "Audit trail"]);
+    expect(labels(["forecaster"])).toEqual(["Timeline", "Overview", "Grids", "Soundings", "Rules", "Zones", "Notifications"]);
+    expect(labels(["lead", "forecaster"])).toEqual(["Timeline", "Overview", "Grids", "Soundings", "Rules", "Zones", "Notifications", "Verification"]);
+    expect(labels(["manager"])).toEqual(["Timeline", "Overview", "Grids", "Soundings", "Rules", "Zones", "Notifications", "History", "Verification", "Audit trail"]);
+    expect(labels(["admin"])).toEqual(["Timeline", "Overview", "Grids", "Soundings", "Rules", "Zones", "Notifications", "Accounts", "History", "Verification", "Audit trail"]);
   });
 
   it("shows nothing to an account without roles", () => {
