@@ -1,4 +1,4 @@
-import { useState } from "react";
+import { useEffect, useRef, useState } from "react";
 import type { TriggerSummaryDto } from "@shared/api/triggers.ts";
 import { Button } from "@/components/ui/button.tsx";
 import { Dialog } from "@/components/ui/dialog.tsx";
@@ -13,6 +13,12 @@ import { useAcknowledgeTrigger } from "../api/trigger-actions.ts";
 export function AcknowledgeDialog({ trigger, onClose, onDone }: { trigger: TriggerSummaryDto | null; onClose: () => void; onDone?: (trigger: TriggerSummaryDto) => void }) {
   const [note, setNote] = useState("");
   const acknowledge = useAcknowledgeTrigger();
+  const noteField = useRef<HTMLTextAreaElement>(null);
+  // The native dialog focuses its first button (Close) when it opens; this effect runs after that,
+  // so the note field gets the keys and "a" then Enter acknowledges.
+  useEffect(() => {
+    if (trigger) noteField.current?.focus();
+  }, [trigger]);
   const close = () => {
     setNote("");
     acknowledge.reset();
@@ -47,7 +53,7 @@ export function AcknowledgeDialog({ trigger, onClose, onDone }: { trigger: Trigg
         <label className="flex flex-col gap-1">
           <span className="text-xs font-medium text-muted">Note (optional)</span>
           <textarea
-            autoFocus
+            ref={noteField}
             rows={3}
             maxLength={2000}
             value={note}

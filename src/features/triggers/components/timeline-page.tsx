@@ -44,7 +44,7 @@ function ActiveSummary({ triggers }: { triggers: readonly TriggerSummaryDto[] | 
   const acknowledged = triggers.filter((t) => t.state === "acknowledged").length;
   return (
     <span data-testid="active-summary">
-      <span className={open > 0 ? "font-semibold text-caution" : ""}>{formatCount(open, "open trigger")}</span>, {formatCount(acknowledged, "acknowledged")}
+      <span className={open > 0 ? "font-semibold text-caution" : ""}>{formatCount(open, "open trigger")}</span>, {formatCount(acknowledged, "acknowledged", "acknowledged")}
     </span>
   );
 }
@@ -133,7 +133,7 @@ export function TimelinePage({ canAcknowledge }: { canAcknowledge: boolean }) {
         title="Timeline"
         description={
           <>
-            <ActiveSummary triggers={active.data} />. Newest first; times in UTC with local time beside. Keys: j / k move, a acknowledges, Enter opens, ? lists all.
+            <ActiveSummary triggers={active.data} /> · newest first · UTC with local time beside · <kbd className="font-mono">?</kbd> lists the keys
           </>
         }
         actions={
@@ -157,7 +157,7 @@ export function TimelinePage({ canAcknowledge }: { canAcknowledge: boolean }) {
             {hasFilters(filters) ? "Nothing on the loaded timeline matches these filters." : "Nothing yet. Triggers appear here the moment a rule matches a new frame; grid arrivals are listed too."}
           </p>
         ) : (
-          <VirtualList ref={list} rows={rows} rowHeight={rowHeight} rowKey={rowKey} renderRow={renderRow} height="calc(100vh - 14.5rem)" label="Timeline entries" onNearEnd={loadOlder} />
+          <VirtualList ref={list} rows={rows} rowHeight={rowHeight} rowKey={rowKey} renderRow={renderRow} height="calc(100vh - 15rem)" label="Timeline entries" onNearEnd={loadOlder} />
         )}
       </div>
       <p className="mt-1.5 text-xs text-muted" aria-live="polite">

@@ -1,15 +1,15 @@
-import { useEffect } from "react";
-import { severityLevel, SEVERITY_KEYS, type Severity } from "@shared/rules/severity.ts";
+import { useEffect, useRef } from "react";
 import { useToast } from "@/components/ui/toaster.tsx";
 import { useActiveTriggers } from "../api/get-active-triggers.ts";
 import { useAlertPreferences } from "../hooks/use-alert-preferences.ts";
 import { useTitleBadge } from "../hooks/use-title-badge.ts";
 import { useTriggerLiveUpdates } from "../hooks/use-trigger-live-updates.ts";
 import { playNewTriggerChime, unlockAlertSound } from "../timeline/alert-sound.ts";
+import { openedNotice } from "../timeline/opened-notice.ts";
 
 const BASE_TITLE = "Bellwether";
-
-const isSeverity = (value: string): value is Severity => (SEVERITY_KEYS as readonly string[]).includes(value);
+/** Triggers opened within this many milliseconds of each other share one chime and one notice. */
+const BURST_MS = 400;
 
 /**
  * Runs on every signed-in page so a new trigger is never missed: keeps trigger data current from
@@ -34,11 +34,19 @@ export function TriggerAlerts() {
     };
   }, []);
 
+  // A frame often opens several triggers at once: gather them, then chime once and show one notice.
+  const burst = useRef<{ severities: string[]; timer: number | null }>({ severities: [], timer: null });
+  useEffect(() => () => window.clearTimeout(burst.current.timer ?? undefined), []);
   useTriggerLiveUpdates((event) => {
-    const label = isSeverity(event.severity) ? severityLevel(event.severity).label : event.severity;
-    if (preferences.sound) playNewTriggerChime();
-    // The notice sits in the toaster's polite live region, so screen readers announce it too.
-    toast.info(`New ${label} trigger opened`, "It is at the top of the timeline.");
+    burst.current.severities.push(event.severity);
+    if (burst.current.timer !== null) return;
+    burst.current.timer = window.setTimeout(() => {
+      const severities = burst.current.severities;
+      burst.current = { severities: [], timer: null };
+      if (preferences.sound) playNewTriggerChime();
+      // The notice sits in the toaster's polite live region, so screen readers announce it too.
+      toast.info(openedNotice(severities), "At the top of the timeline.");
+    }, BURST_MS);
   });
 
   return null;

@@ -3,11 +3,14 @@ import { Panel } from "@/components/ui/panel.tsx";
 import { EVENT_LABELS } from "../timeline/trigger-labels.ts";
 import { UtcLocalTime } from "./utc-local-time.tsx";
 
-/** A few words from an event's extra data (a notification's channel and recipient), never the whole object. */
+/**
+ * A few words from an event's extra data (a notification's channel), never the whole object; row
+ * ids ("frameId", "contactId") mean nothing to a forecaster and are left out.
+ */
 function describeData(data: unknown): string | null {
   if (typeof data !== "object" || data === null || Array.isArray(data)) return null;
   const parts = Object.entries(data as Record<string, unknown>)
-    .filter(([, value]) => typeof value === "string" || typeof value === "number" || typeof value === "boolean")
+    .filter(([key, value]) => !/(Id|Version)$/.test(key) && (typeof value === "string" || typeof value === "number" || typeof value === "boolean"))
     .slice(0, 4)
     .map(([key, value]) => `${key}: ${String(value)}`);
   return parts.length ? parts.join(" · ") : null;

@@ -92,7 +92,7 @@ export function TriggerMapPanel({ trigger }: { trigger: TriggerDetailDto }) {
 
   return (
     <Panel title="Matched area">
-      <div className="mb-3 flex flex-wrap items-end gap-3">
+      <div className="mb-3 flex flex-wrap items-start gap-3">
         <label className="flex flex-col gap-1">
           <span className="text-xs font-medium text-muted">Frame</span>
           <select value={frameId} onChange={(event) => update("frame", event.target.value)} className="h-9 rounded border border-line bg-canvas px-2 font-mono text-sm text-ink">

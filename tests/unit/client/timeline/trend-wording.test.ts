@@ -1,5 +1,6 @@
 import { describe, expect, it } from "vitest";
 import { describeTrend, STEADY_WITHIN_POINTS } from "../../../../src/features/triggers/timeline/trend-wording.ts";
+import { openedNotice } from "../../../../src/features/triggers/timeline/opened-notice.ts";
 
 describe("describeTrend", () => {
   it("says the area grew or shrank, with the change in percentage points", () => {
@@ -20,5 +21,16 @@ describe("describeTrend", () => {
   it("says there is no trend yet when only one run has matched", () => {
     expect(describeTrend(null)).toMatchObject({ direction: "first-run", short: "first run" });
     expect(describeTrend(Number.NaN).direction).toBe("first-run");
+  });
+});
+
+describe("openedNotice", () => {
+  it("names a single new trigger by its severity", () => {
+    expect(openedNotice(["urgent"])).toBe("New Urgent trigger opened");
+  });
+
+  it("sums up a burst, most severe first", () => {
+    expect(openedNotice(["heads-up", "urgent", "heads-up"])).toBe("3 new triggers opened: 1 Urgent, 2 Heads-up");
+    expect(openedNotice([])).toBe("");
   });
 });
