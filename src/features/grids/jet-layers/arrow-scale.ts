@@ -1,13 +1,13 @@
 /**
  * One arrow length per speed for a whole frame, shown by a key arrow. The key speed is the smallest
- * round value for which nine arrows in ten stay shorter than the gap between arrows, so the map
+ * round value for which nine arrows in ten stay shorter than a set share of the gap between arrows, so the map
  * stays readable in calm and in strong flow alike; the legend always says which speed the key is.
  */
 
 /** Length of the key arrow on the map and in the legend (CSS pixels). */
 export const KEY_ARROW_PX = 16;
 /** Round key speeds to choose from (m/s). */
-export const KEY_SPEEDS = [2, 5, 10, 20, 50, 100] as const;
+export const KEY_SPEEDS = [2, 5, 10, 15, 20, 30, 40, 50, 100] as const;
 
 const HISTOGRAM_STEP = 0.25;
 const HISTOGRAM_BINS = 800;

@@ -22,7 +22,7 @@ export const QUADRANT_STYLES: readonly QuadrantStyle[] = [
 ];
 
 /** Opacity of the quadrant shading, low enough for the field beneath to show through. */
-export const QUADRANT_OPACITY = 0.42;
+export const QUADRANT_OPACITY = 0.35;
 
 /** The words for a `jet_quadrant` code; null for "none" and for codes the catalogue does not have. */
 export function quadrantWords(code: number): string | null {

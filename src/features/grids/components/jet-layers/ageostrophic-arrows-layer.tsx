@@ -51,8 +51,9 @@ export function AgeostrophicArrowsLayer({ frame }: { frame: MapFrame }) {
       context.lineJoin = "round";
       context.lineCap = "round";
       for (const [lineWidth, colour] of [
-        [3.2, JET_COLOURS.halo],
-        [1.3, JET_COLOURS.arrow],
+        // A firm halo: the arrows must also read over the pale middle of diverging ramps.
+        [3, "rgba(10, 14, 18, 0.72)"],
+        [1.2, JET_COLOURS.arrow],
       ] as const) {
         context.lineWidth = lineWidth;
         context.strokeStyle = colour;

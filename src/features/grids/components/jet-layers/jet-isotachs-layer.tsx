@@ -1,18 +1,29 @@
 import { useCallback, useMemo } from "react";
-import { LayerCanvas, labelContourLevels, traceContours, tracePolylines, type DrawLayer } from "@/components/map/index.ts";
+import { LayerCanvas, labelContourLevels, traceContours, tracePolylines, type ContourLevel, type DrawLayer } from "@/components/map/index.ts";
 import type { MapFrame } from "../../api/get-frame.ts";
 import { isotachLevels, isotachLineWidth } from "../../jet-layers/isotach-levels.ts";
 import { JET_COLOURS } from "./jet-palette.ts";
 import { useJetField } from "./use-jet-field.ts";
 
-/** Isotachs of the smoothed jet-level speed, every 10 kt from 60 kt, each labelled in knots. */
-export function JetIsotachsLayer({ frame }: { frame: MapFrame }) {
+/** Traced lines per loaded speed field, so the lines and their labels (two canvases) trace once. */
+const traced = new WeakMap<Float32Array, { maxSpeed: number | null; levels: ContourLevel[] }>();
+
+function useIsotachs(frame: MapFrame): ContourLevel[] {
   const speed = useJetField(frame, "jet_speed");
   const maxSpeed = frame.fields.find((field) => field.key === "jet_speed")?.max ?? null;
-  const levels = useMemo(
-    () => (speed.data ? traceContours(speed.data.values, speed.data.nx, speed.data.ny, isotachLevels(maxSpeed)) : []),
-    [speed.data, maxSpeed],
-  );
+  return useMemo(() => {
+    if (!speed.data) return [];
+    const known = traced.get(speed.data.values);
+    if (known && known.maxSpeed === maxSpeed) return known.levels;
+    const levels = traceContours(speed.data.values, speed.data.nx, speed.data.ny, isotachLevels(maxSpeed));
+    traced.set(speed.data.values, { maxSpeed, levels });
+    return levels;
+  }, [speed.data, maxSpeed]);
+}
+
+/** Isotachs of the smoothed jet-level speed, every 10 kt from 60 kt; faster lines a little heavier. */
+export function JetIsotachsLayer({ frame }: { frame: MapFrame }) {
+  const levels = useIsotachs(frame);
   const draw = useCallback<DrawLayer>(
     (context, { transform }) => {
       context.lineJoin = "round";
@@ -30,9 +41,18 @@ export function JetIsotachsLayer({ frame }: { frame: MapFrame }) {
           context.stroke();
         }
       }
-      labelContourLevels(context, levels, transform, (level) => `${level.display} kt`, JET_COLOURS.isotach);
     },
     [levels],
   );
   return <LayerCanvas draw={draw} label="jet-isotachs" />;
+}
+
+/** Each isotach's speed in knots, written above the other layers. */
+export function JetIsotachLabelsLayer({ frame }: { frame: MapFrame }) {
+  const levels = useIsotachs(frame);
+  const draw = useCallback<DrawLayer>(
+    (context, { transform }) => labelContourLevels(context, levels, transform, (level) => `${level.display} kt`, JET_COLOURS.isotach),
+    [levels],
+  );
+  return <LayerCanvas draw={draw} label="jet-isotach-labels" />;
 }

@@ -16,9 +16,10 @@ function Chip({ children, style, width = 16 }: { children?: ReactNode; style?: C
   );
 }
 
+/** The quadrant's tint as on the map, inside an outline in its full colour (as each quadrant is outlined on the map). */
 export function QuadrantSwatch({ colour }: { colour: string }) {
   return (
-    <Chip>
+    <Chip style={{ boxShadow: `inset 0 0 0 2px ${colour}` }}>
       <span className="h-full w-full" style={{ background: colour, opacity: QUADRANT_OPACITY }} />
     </Chip>
   );
@@ -29,7 +30,7 @@ export function FavouredSwatch() {
   return (
     <Chip
       style={{
-        backgroundImage: `repeating-linear-gradient(135deg, rgba(255,255,255,0.8) 0 1.3px, transparent 1.3px ${HATCH_SPACING_PX / Math.SQRT2}px)`,
+        backgroundImage: `repeating-linear-gradient(135deg, rgba(255,255,255,0.6) 0 1.1px, transparent 1.1px ${HATCH_SPACING_PX / Math.SQRT2}px)`,
       }}
     />
   );

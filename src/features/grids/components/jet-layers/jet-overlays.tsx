@@ -1,10 +1,10 @@
 import type { MapOverlay, MapOverlayGroup } from "../map/map-overlays.tsx";
 import { AgeostrophicArrowsLayer } from "./ageostrophic-arrows-layer.tsx";
 import { JetAxesLayer } from "./jet-axes-layer.tsx";
-import { JetIsotachsLayer } from "./jet-isotachs-layer.tsx";
+import { JetIsotachLabelsLayer, JetIsotachsLayer } from "./jet-isotachs-layer.tsx";
 import { JET_LAYER_IDS } from "./jet-layer-ids.ts";
 import { JetLegend } from "./jet-legend.tsx";
-import { JetQuadrantsLayer } from "./jet-quadrants-layer.tsx";
+import { JetQuadrantLabelsLayer, JetQuadrantsLayer } from "./jet-quadrants-layer.tsx";
 import { jetLayersUnavailable } from "./use-jet-field.ts";
 
 export const JET_GROUP_ID = "jet-level";
@@ -27,6 +27,7 @@ export const JET_SHADING_OVERLAYS: readonly MapOverlay[] = [
     visibleByDefault: false,
     unavailableReason,
     render: ({ frame }) => <JetQuadrantsLayer frame={frame} />,
+    labels: ({ frame }) => <JetQuadrantLabelsLayer frame={frame} />,
   },
 ];
 
@@ -38,6 +39,7 @@ export const JET_LINE_OVERLAYS: readonly MapOverlay[] = [
     visibleByDefault: false,
     unavailableReason,
     render: ({ frame }) => <JetIsotachsLayer frame={frame} />,
+    labels: ({ frame }) => <JetIsotachLabelsLayer frame={frame} />,
   },
   {
     id: JET_LAYER_IDS.arrows,

@@ -70,6 +70,7 @@ export function FrameMapView({ frame }: { frame: MapFrame }) {
   });
 
   const overlayContext: OverlayContext = { frame, field, values: values.data ?? null, scale };
+  const visibleOverlays = MAP_OVERLAYS.filter((overlay) => settings.overlays.includes(overlay.id) && !overlay.unavailableReason?.(overlayContext));
   const mapLabel = field
     ? `Map of ${field.key}. Point or use the arrow keys to read values; click or press Enter to open the sounding there.`
     : "Map of the frame";
@@ -80,9 +81,10 @@ export function FrameMapView({ frame }: { frame: MapFrame }) {
         <FrameStepper frames={runFrames} frameId={frame.id} linkTo={linkTo} />
         <MapStage geometry={frame.geometry} maxHeight={Math.max(320, window.innerHeight - 260)}>
           {values.data && scale && <FieldRasterLayer field={values.data} scale={scale} />}
-          {MAP_OVERLAYS.filter((overlay) => settings.overlays.includes(overlay.id) && !overlay.unavailableReason?.(overlayContext)).map((overlay) => (
+          {visibleOverlays.map((overlay) => (
             <Fragment key={overlay.id}>{overlay.render(overlayContext)}</Fragment>
           ))}
+          {visibleOverlays.map((overlay) => overlay.labels && <Fragment key={`${overlay.id}-labels`}>{overlay.labels(overlayContext)}</Fragment>)}
           <MapPointerSurface label={mapLabel} onPoint={setPoint} onPick={(p) => navigate(soundingLinkForPoint(frame.id, p.lat, p.lon))} />
         </MapStage>
         {values.isPending && fieldKey && <Loading label={`Loading ${fieldKey}…`} />}

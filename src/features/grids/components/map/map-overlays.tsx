@@ -24,6 +24,8 @@ export interface MapOverlay {
   /** Why the overlay cannot be drawn right now (shown beside its toggle), or null when it can. */
   unavailableReason?: (context: OverlayContext) => string | null;
   render: (context: OverlayContext) => ReactNode;
+  /** Words the overlay writes on the map, drawn above every overlay so the lines of later ones never cover them. */
+  labels?: (context: OverlayContext) => ReactNode;
   /** Id of the group (in MAP_OVERLAY_GROUPS) whose toggles and legend this overlay shares. */
   group?: string;
 }
