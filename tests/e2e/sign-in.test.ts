@@ -20,10 +20,10 @@ afterAll(async () => {
 
 /** What each demo role should find in the main navigation, and nothing more. */
 const EXPECTED_NAV: Record<string, string[]> = {
-  lead: ["Timeline", "Overview", "Grids", "Soundings"],
-  forecaster: ["Timeline", "Overview", "Grids", "Soundings"],
-  manager: ["Timeline", "Overview", "Grids", "Soundings", "Audit trail"],
-  admin: ["Timeline", "Overview", "Grids", "Soundings", "Accounts", "Audit trail"],
+  lead: ["Timeline", "Overview", "Grids", "Soundings", "Rules", "Zones", "Notifications", "Verification"],
+  forecaster: ["Timeline", "Overview", "Grids", "Soundings", "Rules", "Zones", "Notifications"],
+  manager: ["Timeline", "Overview", "Grids", "Soundings", "Rules", "Zones", "Notifications", "History", "Verification", "Audit trail"],
+  admin: ["Timeline", "Overview", "Grids", "Soundings", "Rules", "Zones", "Notifications", "Accounts", "History", "Verification", "Audit trail"],
 };
 
 describe("sign-in in a real browser", () => {
