@@ -11,13 +11,18 @@ export interface ScoredMatch {
   leadTime: LeadTimeDto;
 }
 
+/** Scores and the lead-time distribution from counts and the detected reports' lead times. */
+export function scoreCounts(counts: VerificationCounts, leadMinutes: number[]): ScoredMatch {
+  return {
+    triggers: counts.verifiedTriggers + counts.falseAlarms,
+    reports: counts.detectedReports + counts.misses,
+    counts,
+    scores: verificationScores(counts),
+    leadTime: { ...medianAndP90(leadMinutes), minutes: leadMinutes },
+  };
+}
+
 /** Counts, scores and the lead-time distribution of one match. */
 export function scoreMatch(result: MatchResult): ScoredMatch {
-  return {
-    triggers: result.triggers.length,
-    reports: result.reports.length,
-    counts: result.counts,
-    scores: verificationScores(result.counts),
-    leadTime: { ...medianAndP90(result.leadTimesMinutes), minutes: result.leadTimesMinutes },
-  };
+  return scoreCounts(result.counts, result.leadTimesMinutes);
 }

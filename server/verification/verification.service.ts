@@ -26,7 +26,7 @@ import type { RuleMapService } from "../rules/rule-map.service.ts";
 import type { StormReportService } from "../storm-reports/storm-report.service.ts";
 import { toStormReportDto } from "../storm-reports/storm-report.service.ts";
 import { ReportZoneDistances } from "./report-space.ts";
-import { scoreMatch } from "./score-row.ts";
+import { scoreCounts, scoreMatch, type ScoredMatch } from "./score-row.ts";
 import { TriggerAreas } from "./trigger-areas.ts";
 import { compareVersions } from "./compare-versions.ts";
 
@@ -64,7 +64,8 @@ export class VerificationService {
     const ruleId = selectedVersion?.ruleId ?? q.ruleId ?? null;
     if (ruleId) await this.deps.rules.find(ruleId, true);
 
-    const triggers = await this.triggersOverlapping(q.from, q.to, ruleId, selectedVersion?.id ?? null);
+    // A chosen version is scored within its whole rule, so reports its siblings detected are not counted against it.
+    const triggers = await this.triggersOverlapping(q.from, q.to, ruleId);
     const rules = await this.dataSource.getRepository(RuleEntity).find(ruleId ? { where: { id: ruleId } } : {});
     const ruleName = new Map(rules.map((r) => [r.id, r.name]));
     const versions = await this.versionInfo(rules.map((r) => r.id));
@@ -75,41 +76,42 @@ export class VerificationService {
     const near = await this.spaceTest(triggers, reports, options, distances);
 
     const domain = (vs: Iterable<VersionInfo>) => distances.inDomain(reports, [...vs].flatMap((v) => v.zoneIds), options.distanceKm);
-    const during = (v: VersionInfo, list: StormReportEntity[]) => list.filter((r) => Date.parse(r.time) >= v.from && (v.until === null || Date.parse(r.time) < v.until));
     const match = (ts: TriggerEntity[], rs: StormReportEntity[]) =>
       matchReportsToTriggers(ts.map(toMatchable), rs.map((r) => ({ id: r.id, time: Date.parse(r.time) })), options.windowHours, (ti, ri) => near(ts[ti]!, rs[ri]!));
 
-    const byVersion: ScoreRowDto[] = [];
-    for (const v of versions.values()) {
-      const own = triggers.filter((t) => t.ruleVersionId === v.entity.id);
-      const overlaps = v.from <= Date.parse(q.to) && (v.until === null || v.until >= Date.parse(q.from));
-      if (selectedVersion ? v.entity.id !== selectedVersion.id : own.length === 0 && !(ruleId && overlaps)) continue;
-      const scored = scoreMatch(match(own, during(v, domain([v]))));
-      byVersion.push({ ruleId: v.entity.ruleId, ruleName: ruleName.get(v.entity.ruleId) ?? `rule ${v.entity.ruleId}`, versionId: v.entity.id, version: v.entity.version, ...scored });
-    }
     const byRule: ScoreRowDto[] = [];
+    const byVersion: ScoreRowDto[] = [];
+    const perRule = new Map<number, RuleMatch>();
     for (const rule of rules) {
+      const ruleVersions = [...versions.values()].filter((v) => v.entity.ruleId === rule.id);
       const own = triggers.filter((t) => t.ruleId === rule.id);
-      if (own.length === 0 && rule.id !== ruleId) continue;
-      const scored = scoreMatch(match(own, domain([...versions.values()].filter((v) => v.entity.ruleId === rule.id))));
-      byRule.push({ ruleId: rule.id, ruleName: rule.name, versionId: null, version: null, ...scored });
+      const ruleReports = domain(ruleVersions);
+      const matched = match(own, ruleReports);
+      const owners = reportOwners(ruleReports, matched, own, ruleVersions);
+      perRule.set(rule.id, { triggers: own, reports: ruleReports, matched, owners });
+      if (own.length > 0 || rule.id === ruleId) byRule.push({ ruleId: rule.id, ruleName: rule.name, versionId: null, version: null, ...scoreMatch(matched) });
+      for (const v of ruleVersions) {
+        const scored = scoreVersion(v.entity.id, perRule.get(rule.id)!);
+        const overlaps = v.from <= Date.parse(q.to) && (v.until === null || v.until >= Date.parse(q.from));
+        const wanted = selectedVersion ? v.entity.id === selectedVersion.id : scored.triggers > 0 || scored.reports > 0 || (ruleId !== null && overlaps);
+        if (wanted) byVersion.push({ ruleId: rule.id, ruleName: rule.name, versionId: v.entity.id, version: v.entity.version, ...scored });
+      }
     }
 
-    const selected = selectedVersion ? versions.get(selectedVersion.id)! : null;
-    const overallReports = selected ? during(selected, domain([selected])) : domain([...versions.values()].filter((v) => !ruleId || v.entity.ruleId === ruleId));
-    const overall = match(triggers, overallReports);
+    // The selection as a whole: one version, one rule, or every rule together (a report detected by any rule).
+    const selection = ruleId ? perRule.get(ruleId)! : { triggers, reports: domain(versions.values()), matched: match(triggers, domain(versions.values())), owners: new Map<number, number>() };
+    const overall = selectedVersion ? byVersion.find((r) => r.versionId === selectedVersion.id)! : ruleId ? byRule.find((r) => r.ruleId === ruleId)! : scoreMatch(selection.matched);
+    const shownTriggers = selection.triggers.map((t, k) => ({ t, m: selection.matched.triggers[k]! })).filter(({ t }) => !selectedVersion || t.ruleVersionId === selectedVersion.id);
+    const shownReports = selection.reports.map((r, k) => ({ r, m: selection.matched.reports[k]! })).filter(({ r }) => !selectedVersion || selection.owners.get(r.id) === selectedVersion.id);
     return {
       from: new Date(q.from).toISOString(),
       to: new Date(q.to).toISOString(),
       options,
-      overall: scoreMatch(overall),
+      overall: { triggers: overall.triggers, reports: overall.reports, counts: overall.counts, scores: overall.scores, leadTime: overall.leadTime },
       byRule,
       byVersion,
-      triggers: this.triggerRows(triggers, overall, ruleName, versions, zones, near.zoneFallbacks),
-      reports: overallReports.map((r, k) => {
-        const m = overall.reports[k]!;
-        return { ...toStormReportDto(r), outcome: m.outcome, triggerIds: m.triggerIds, lateTriggerIds: m.lateTriggerIds, leadMinutes: m.leadMinutes };
-      }),
+      triggers: this.triggerRows(shownTriggers, ruleName, versions, zones, near.zoneFallbacks),
+      reports: shownReports.map(({ r, m }) => ({ ...toStormReportDto(r), outcome: m.outcome, triggerIds: m.triggerIds, lateTriggerIds: m.lateTriggerIds, leadMinutes: m.leadMinutes })),
       zones: zones
         .filter((z) => triggers.some((t) => t.zoneId === z.id) || [...versions.values()].some((v) => (!ruleId || v.entity.ruleId === ruleId) && v.zoneIds.includes(z.id)))
         .map((z) => ({ id: z.id, code: z.code, name: z.name, geometry: JSON.parse(z.geometry) as unknown })),
@@ -121,13 +123,12 @@ export class VerificationService {
     return compareVersions(this.dataSource, this.deps, q, resolveOptions(q));
   }
 
-  private async triggersOverlapping(from: string, to: string, ruleId: number | null, versionId: number | null): Promise<TriggerEntity[]> {
+  private async triggersOverlapping(from: string, to: string, ruleId: number | null): Promise<TriggerEntity[]> {
     const qb = this.dataSource
       .getRepository(TriggerEntity)
       .createQueryBuilder("t")
       .where("t.first_valid_time <= :to AND t.last_valid_time >= :from", { from: new Date(from).toISOString(), to: new Date(to).toISOString() });
     if (ruleId) qb.andWhere("t.rule_id = :ruleId", { ruleId });
-    if (versionId) qb.andWhere("t.rule_version_id = :versionId", { versionId });
     return qb.orderBy("t.opened_at", "ASC").addOrderBy("t.id", "ASC").getMany();
   }
 
@@ -170,14 +171,13 @@ export class VerificationService {
   }
 
   private triggerRows(
-    triggers: TriggerEntity[],
-    overall: MatchResult,
+    shown: Array<{ t: TriggerEntity; m: { verified: boolean; reportIds: number[] } }>,
     ruleName: Map<number, string>,
     versions: Map<number, VersionInfo>,
     zones: ZoneEntity[],
     zoneFallbacks: Set<number>,
   ): VerificationDto["triggers"] {
-    return triggers.map((t, k) => ({
+    return shown.map(({ t, m }) => ({
       id: t.id,
       ruleId: t.ruleId,
       ruleName: ruleName.get(t.ruleId) ?? `rule ${t.ruleId}`,
@@ -188,9 +188,62 @@ export class VerificationService {
       openedAt: t.openedAt,
       firstValidTime: t.firstValidTime,
       lastValidTime: t.lastValidTime,
-      verified: overall.triggers[k]!.verified,
-      reportIds: overall.triggers[k]!.reportIds,
+      verified: m.verified,
+      reportIds: m.reportIds,
       usedZoneInstead: zoneFallbacks.has(t.id),
     }));
   }
+}
+
+interface RuleMatch {
+  triggers: TriggerEntity[];
+  reports: StormReportEntity[];
+  matched: MatchResult;
+  /** Report id → the version it counts for. */
+  owners: Map<number, number>;
+}
+
+/**
+ * Each report counts for one version of its rule: the version of the earliest-opened trigger that
+ * detected it, or, undetected, the version that was current when it happened (none before the
+ * rule's first version).
+ */
+function reportOwners(reports: StormReportEntity[], matched: MatchResult, triggers: TriggerEntity[], ruleVersions: VersionInfo[]): Map<number, number> {
+  const byId = new Map(triggers.map((t) => [t.id, t]));
+  const owners = new Map<number, number>();
+  reports.forEach((r, k) => {
+    const m = matched.reports[k]!;
+    if (m.outcome === "detected") {
+      const first = m.triggerIds.map((id) => byId.get(id)!).reduce((a, b) => (Date.parse(b.openedAt) < Date.parse(a.openedAt) ? b : a));
+      owners.set(r.id, first.ruleVersionId);
+      return;
+    }
+    const time = Date.parse(r.time);
+    const current = ruleVersions.find((v) => time >= v.from && (v.until === null || time < v.until));
+    if (current) owners.set(r.id, current.entity.id);
+  });
+  return owners;
+}
+
+/** One version's row: its own triggers (verified or not, by the rule's match) and the reports it owns. */
+function scoreVersion(versionId: number, rule: RuleMatch): ScoredMatch {
+  let verifiedTriggers = 0;
+  let falseAlarms = 0;
+  rule.triggers.forEach((t, k) => {
+    if (t.ruleVersionId !== versionId) return;
+    if (rule.matched.triggers[k]!.verified) verifiedTriggers++;
+    else falseAlarms++;
+  });
+  let detectedReports = 0;
+  let misses = 0;
+  const leads: number[] = [];
+  rule.reports.forEach((r, k) => {
+    if (rule.owners.get(r.id) !== versionId) return;
+    const m = rule.matched.reports[k]!;
+    if (m.outcome === "detected") {
+      detectedReports++;
+      leads.push(m.leadMinutes!);
+    } else misses++;
+  });
+  return scoreCounts({ verifiedTriggers, falseAlarms, detectedReports, misses }, leads);
 }

@@ -119,6 +119,25 @@ describe("verification against storm reports", () => {
     expect((await verify(`ruleId=${ruleId}&kinds=tornado`)).overall.counts).toEqual({ verifiedTriggers: 1, falseAlarms: 2, detectedReports: 1, misses: 0 });
   });
 
+  it("counts a report for the version whose trigger detected it, even after the next version was saved", async () => {
+    // r6 at 22:20 in EAST falls after v2 was saved (21:45) but inside v1's trigger T2 with a 3 h window (ends 23:00)
+    clock = new Date(at("23:59"));
+    const upload = await manager.agent
+      .post("/api/storm-reports")
+      .set("x-csrf-token", manager.csrf)
+      .send({ csv: [STORM_REPORT_CSV_HEADER, `${at("22:20")},35.5,-97.5,wind,55,kt,r6 late evening in EAST`].join("\n") });
+    expect(upload.body.stored).toHaveLength(1);
+    const body = await verify(`ruleId=${ruleId}&windowHours=3`);
+    const row = (id: number) => body.byVersion.find((r: { versionId: number }) => r.versionId === id);
+    expect(row(v1).counts).toEqual({ verifiedTriggers: 2, falseAlarms: 0, detectedReports: 4, misses: 0 });
+    expect(row(v2).counts).toEqual({ verifiedTriggers: 0, falseAlarms: 1, detectedReports: 0, misses: 0 });
+    // Derived in closed form: r6 − T2's opening = 22:20 − 16:00 = 380 min
+    expect(body.reports.find((r: { remarks: string }) => r.remarks.startsWith("r6")).leadMinutes).toBe(380);
+    const onlyV2 = await verify(`ruleVersionId=${v2}&windowHours=3`);
+    expect(onlyV2.reports).toEqual([]);
+    expect(onlyV2.triggers.map((x: { id: number }) => x.id)).toEqual([t.t3]);
+  });
+
   it("refuses a bad query and is for leads, managers and admins", async () => {
     expect((await manager.agent.get(`/api/verification?from=${at("20:00")}&to=${at("19:00")}`)).status).toBe(400);
     expect((await manager.agent.get(`/api/verification?${PERIOD}&kinds=hail,funnel`)).status).toBe(400);

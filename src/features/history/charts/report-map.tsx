@@ -1,5 +1,5 @@
 import { useMemo } from "react";
-import { geoConicConformal, geoPath, type GeoPermissibleObjects } from "d3-geo";
+import { geoArea, geoConicConformal, geoPath, type GeoPermissibleObjects } from "d3-geo";
 import type { StormReportKind } from "@shared/storm-reports/storm-report-kinds.ts";
 import { describeReport } from "../format-verification.ts";
 
@@ -33,6 +33,21 @@ export const OUTCOME_STYLE: Record<ReportOutcome, { colour: string; label: strin
 };
 const ZONE_FILL: Record<MapZone["status"], string> = { verified: "var(--bw-ok)", "false-alarm": "var(--bw-danger)", quiet: "transparent" };
 
+type Rings = number[][][];
+
+/**
+ * d3-geo reads polygons on the sphere, where ring order says which side is inside: an exterior ring
+ * in GeoJSON's counter-clockwise order would enclose the rest of the globe. Rings of any polygon
+ * that would cover more than a hemisphere are reversed, so every zone draws as the small area it is.
+ */
+export function ringsForSphere(geometry: unknown): unknown {
+  const g = geometry as { type: string; coordinates: Rings | Rings[] };
+  const fix = (rings: Rings) => (geoArea({ type: "Polygon", coordinates: rings } as GeoPermissibleObjects) > 2 * Math.PI ? rings.map((r) => [...r].reverse()) : rings);
+  if (g.type === "Polygon") return { type: "Polygon", coordinates: fix(g.coordinates as Rings) };
+  if (g.type === "MultiPolygon") return { type: "MultiPolygon", coordinates: (g.coordinates as Rings[]).map(fix) };
+  return geometry;
+}
+
 /** Kind by shape (tornado triangle, hail circle, wind square), outcome by colour and by the legend's words. */
 function ReportMark({ x, y, kind, colour }: { x: number; y: number; kind: StormReportKind; colour: string }) {
   const common = { fill: colour, stroke: "var(--bw-canvas)", strokeWidth: 1.5 };
@@ -42,7 +57,8 @@ function ReportMark({ x, y, kind, colour }: { x: number; y: number; kind: StormR
 }
 
 /** The scored zones and the storm reports on one small conformal map (zones tinted by how their triggers fared). */
-export function ReportMap({ zones, reports, title }: { zones: readonly MapZone[]; reports: readonly MapReport[]; title: string }) {
+export function ReportMap({ zones: given, reports, title }: { zones: readonly MapZone[]; reports: readonly MapReport[]; title: string }) {
+  const zones = useMemo(() => given.map((z) => ({ ...z, geometry: ringsForSphere(z.geometry) })), [given]);
   const geometry = useMemo(() => {
     const features = [
       ...zones.map((z) => ({ type: "Feature", properties: {}, geometry: z.geometry })),

@@ -13,6 +13,9 @@ const PRINT_CSS = `
   }
   header:has(+ div > nav[aria-label="Main"]), nav[aria-label="Main"], [data-print-hide] { display: none !important; }
   main { padding: 0 !important; }
+  .overflow-x-auto { overflow: visible !important; }
+  table { font-size: 9px; }
+  th, td { padding: 2px 4px !important; white-space: normal !important; }
   a { color: inherit !important; text-decoration: none !important; }
   tr, figure, section { break-inside: avoid; }
   h2 { break-after: avoid; }
