@@ -86,7 +86,7 @@ export function TimelinePage({ canAcknowledge }: { canAcknowledge: boolean }) {
 
   const startAcknowledge = (withNote: boolean) => {
     const trigger = triggerOfRow(rows[selectedIndex], triggersById);
-    if (!trigger) return;
+    if (!trigger) return toast.info("Select a trigger first", "j and k move the selection.");
     if (!canAcknowledge) return toast.info("Your roles cannot acknowledge triggers", "Forecasters and leads can.");
     if (trigger.state !== "open") return toast.info(`This trigger is ${trigger.state}`, "Only open triggers can be acknowledged.");
     if (withNote) return setAcknowledging(trigger);

@@ -72,6 +72,8 @@ export function TriggerPage({ triggerId, permissions, deliveries }: { triggerId:
             <TriggerMapPanel trigger={t} />
           </SectionBoundary>
           <TriggerFramesTable frames={frames} fieldKeys={fieldKeys} selectedFrameId={selectedFrameId} onSelect={selectFrame} />
+          {/* Slot: who was notified and how delivery went (the route fills it from the notifications feature); wide tables need the main column. */}
+          {deliveries}
           <Panel title="Coverage across runs">
             <CoverageChart frames={frames} />
           </Panel>
@@ -79,8 +81,6 @@ export function TriggerPage({ triggerId, permissions, deliveries }: { triggerId:
         <div className="flex min-w-0 flex-col gap-4">
           <TriggerFacts trigger={t} />
           <TriggerActionsPanel trigger={t} permissions={permissions} />
-          {/* Slot: who was notified and how delivery went (the notifications feature fills it in the route). */}
-          {deliveries}
           <TriggerEvents events={t.events} />
         </div>
       </div>
