@@ -26,6 +26,38 @@ function Picker({ label, value, onChange, children }: { label: string; value: st
   );
 }
 
+/**
+ * A zone or rule filter. The options come from the loaded entries; an id from the URL that is not
+ * among them (an older trigger's zone) is still listed, so the filter reads what it does.
+ */
+function IdPicker({
+  label,
+  anyLabel,
+  unknownLabel,
+  value,
+  options,
+  onChange,
+}: {
+  label: string;
+  anyLabel: string;
+  unknownLabel: string;
+  value: number | null;
+  options: readonly FilterOption[];
+  onChange: (id: number | null) => void;
+}) {
+  return (
+    <Picker label={label} value={String(value ?? "")} onChange={(next) => onChange(next === "" ? null : Number(next))}>
+      <option value="">{anyLabel}</option>
+      {value !== null && !options.some((option) => option.id === value) && <option value={value}>{`${unknownLabel} ${value}`}</option>}
+      {options.map((option) => (
+        <option key={option.id} value={option.id}>
+          {option.label}
+        </option>
+      ))}
+    </Picker>
+  );
+}
+
 /** Whether live updates are arriving; a calm word, not an alarm, when the stream is reconnecting. */
 function LiveDot() {
   const status = useServerEventStatus();
@@ -51,7 +83,6 @@ export function TimelineToolbar({
   rules: readonly FilterOption[];
 }) {
   const preferences = useAlertPreferences();
-  const id = (value: string) => (value === "" ? null : Number(value));
   return (
     <div className="flex flex-wrap items-center gap-x-4 gap-y-2 rounded-t-md border border-b-0 border-line bg-surface px-3 py-2">
       <fieldset className="flex flex-wrap items-center gap-x-3 gap-y-2">
@@ -71,24 +102,8 @@ export function TimelineToolbar({
             </option>
           ))}
         </Picker>
-        <Picker label="Zone" value={String(filters.zoneId ?? "")} onChange={(value) => onFilters({ ...filters, zoneId: id(value) })}>
-          <option value="">Any zone</option>
-          {filters.zoneId !== null && !zones.some((zone) => zone.id === filters.zoneId) && <option value={filters.zoneId}>zone {filters.zoneId}</option>}
-          {zones.map((zone) => (
-            <option key={zone.id} value={zone.id}>
-              {zone.label}
-            </option>
-          ))}
-        </Picker>
-        <Picker label="Rule" value={String(filters.ruleId ?? "")} onChange={(value) => onFilters({ ...filters, ruleId: id(value) })}>
-          <option value="">Any rule</option>
-          {filters.ruleId !== null && !rules.some((rule) => rule.id === filters.ruleId) && <option value={filters.ruleId}>rule {filters.ruleId}</option>}
-          {rules.map((rule) => (
-            <option key={rule.id} value={rule.id}>
-              {rule.label}
-            </option>
-          ))}
-        </Picker>
+        <IdPicker label="Zone" anyLabel="Any zone" unknownLabel="zone" value={filters.zoneId} options={zones} onChange={(zoneId) => onFilters({ ...filters, zoneId })} />
+        <IdPicker label="Rule" anyLabel="Any rule" unknownLabel="rule" value={filters.ruleId} options={rules} onChange={(ruleId) => onFilters({ ...filters, ruleId })} />
         {hasFilters(filters) && (
           <Button size="sm" variant="ghost" onClick={() => onFilters(NO_FILTERS)}>
             Clear filters

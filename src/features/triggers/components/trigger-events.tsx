@@ -1,6 +1,6 @@
 import type { TriggerEventDto } from "@shared/api/triggers.ts";
 import { Panel } from "@/components/ui/panel.tsx";
-import { EVENT_LABELS } from "../timeline/trigger-labels.ts";
+import { EVENT_LABELS } from "@/lib/trigger-words.ts";
 import { UtcLocalTime } from "./utc-local-time.tsx";
 
 /**

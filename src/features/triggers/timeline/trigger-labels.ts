@@ -1,30 +1,7 @@
-import type { TriggerEventKind, TriggerState, TriggerSummaryDto } from "@shared/api/triggers.ts";
+import type { TriggerSummaryDto } from "@shared/api/triggers.ts";
 import { fieldByKey } from "@shared/fields.ts";
-import type { Tone } from "@/components/ui/chip.tsx";
 import { formatFieldValue } from "@/lib/format-units.ts";
 import { formatLocalTime, formatUtcTime, type LocalFormatOptions } from "@/lib/time.ts";
-
-/** How a trigger's state reads on screen. Open stands out; closed states step back. */
-export const STATE_LABELS: Record<TriggerState, { label: string; tone: Tone }> = {
-  open: { label: "Open", tone: "caution" },
-  acknowledged: { label: "Acknowledged", tone: "ok" },
-  cleared: { label: "Cleared", tone: "neutral" },
-  expired: { label: "Expired", tone: "neutral" },
-  "false-alarm": { label: "False alarm", tone: "neutral" },
-};
-
-export const EVENT_LABELS: Record<TriggerEventKind, string> = {
-  opened: "Opened",
-  updated: "Updated by a newer frame",
-  acknowledged: "Acknowledged",
-  commented: "Comment",
-  cleared: "Cleared",
-  expired: "Expired",
-  "false-alarm": "Closed as a false alarm",
-  escalated: "Escalated",
-  notified: "Notified",
-  "notify-failed": "Notification failed",
-};
 
 const pad2 = (n: number) => String(n).padStart(2, "0");
 const WEEKDAYS = ["Sun", "Mon", "Tue", "Wed", "Thu", "Fri", "Sat"];
