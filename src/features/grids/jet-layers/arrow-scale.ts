@@ -6,6 +6,11 @@
 
 /** Length of the key arrow on the map and in the legend (CSS pixels). */
 export const KEY_ARROW_PX = 16;
+/**
+ * Arrows shorter than this (CSS pixels) are left out: their direction could not be read, and dots in
+ * their place would look like the dotted "ambiguous" marking of the quadrant layer.
+ */
+export const SHORTEST_ARROW_PX = 3;
 /** Round key speeds to choose from (m/s). */
 export const KEY_SPEEDS = [2, 5, 10, 15, 20, 30, 40, 50, 100] as const;
 
@@ -16,6 +21,8 @@ export interface ArrowScale {
   /** Speed (m/s) the key arrow stands for. */
   keySpeed: number;
   pixelsPerMetrePerSecond: number;
+  /** Slowest wind (m/s) drawn as an arrow; slower points are left out. */
+  slowestDrawn: number;
   /** The 90th-percentile speed the choice was made from (m/s); null when the field has no values. */
   speed90: number | null;
 }
@@ -45,5 +52,6 @@ export function chooseArrowScale(speed90: number | null, gapPx: number): ArrowSc
   const fallback = 10;
   const needed = speed90 === null ? fallback : (speed90 * KEY_ARROW_PX) / gapPx;
   const keySpeed = KEY_SPEEDS.find((candidate) => candidate >= needed) ?? KEY_SPEEDS[KEY_SPEEDS.length - 1]!;
-  return { keySpeed, pixelsPerMetrePerSecond: KEY_ARROW_PX / keySpeed, speed90 };
+  const pixelsPerMetrePerSecond = KEY_ARROW_PX / keySpeed;
+  return { keySpeed, pixelsPerMetrePerSecond, slowestDrawn: SHORTEST_ARROW_PX / pixelsPerMetrePerSecond, speed90 };
 }

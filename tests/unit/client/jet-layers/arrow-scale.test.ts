@@ -1,5 +1,5 @@
 import { describe, expect, it } from "vitest";
-import { chooseArrowScale, KEY_ARROW_PX, speedPercentile90 } from "../../../../src/features/grids/jet-layers/arrow-scale.ts";
+import { chooseArrowScale, KEY_ARROW_PX, SHORTEST_ARROW_PX, speedPercentile90 } from "../../../../src/features/grids/jet-layers/arrow-scale.ts";
 
 describe("ageostrophic arrow scale", () => {
   it("finds the 90th-percentile speed to a quarter of a metre per second, ignoring points without a value", () => {
@@ -26,6 +26,8 @@ describe("ageostrophic arrow scale", () => {
     expect(strong.keySpeed).toBe(20);
     expect(36 * strong.pixelsPerMetrePerSecond).toBeCloseTo(28.8, 9);
     expect(strong.pixelsPerMetrePerSecond * strong.keySpeed).toBeCloseTo(KEY_ARROW_PX, 9);
+    // Derived in closed form: at 16 px per 20 m/s an arrow of 3 px (the shortest drawn) stands for 3.75 m/s.
+    expect(strong.slowestDrawn).toBeCloseTo((SHORTEST_ARROW_PX * 20) / KEY_ARROW_PX, 9);
     // Calm flow: 2 m/s keys keep weak arrows visible.
     expect(chooseArrowScale(1, 30).keySpeed).toBe(2);
   });

@@ -2,11 +2,10 @@ import { useCallback, useMemo } from "react";
 import { LayerCanvas, useMapViewport, type DrawLayer } from "@/components/map/index.ts";
 import type { MapFrame } from "../../api/get-frame.ts";
 import { ageostrophicArrows, type ArrowSamples } from "../../jet-layers/ageostrophic-arrows.ts";
+import { SHORTEST_ARROW_PX } from "../../jet-layers/arrow-scale.ts";
 import { JET_COLOURS } from "./jet-palette.ts";
 import { useAgeostrophicWind } from "./use-arrow-scale.ts";
 
-/** Arrows shorter than this (CSS pixels) are drawn as a dot: their direction could not be read. */
-const SHORTEST_ARROW_PX = 3;
 
 /** Adds one arrow centred on (x, y) to the path: shaft and an open head. */
 function addArrow(context: CanvasRenderingContext2D, x: number, y: number, dirX: number, dirY: number, length: number) {
@@ -27,12 +26,7 @@ function addArrow(context: CanvasRenderingContext2D, x: number, y: number, dirX:
 function addArrows(context: CanvasRenderingContext2D, samples: ArrowSamples, pixelsPerMetrePerSecond: number) {
   for (let k = 0; k < samples.count; k++) {
     const length = samples.speed[k]! * pixelsPerMetrePerSecond;
-    if (length < SHORTEST_ARROW_PX) {
-      context.moveTo(samples.x[k]! + 1, samples.y[k]!);
-      context.arc(samples.x[k]!, samples.y[k]!, 1, 0, 2 * Math.PI);
-    } else {
-      addArrow(context, samples.x[k]!, samples.y[k]!, samples.dirX[k]!, samples.dirY[k]!, length);
-    }
+    if (length >= SHORTEST_ARROW_PX) addArrow(context, samples.x[k]!, samples.y[k]!, samples.dirX[k]!, samples.dirY[k]!, length);
   }
 }
 

@@ -1,7 +1,7 @@
 import type { ReactNode } from "react";
 import { Notice } from "@/components/ui/notice.tsx";
 import { describeError } from "@/lib/describe-error.ts";
-import { formatWindKnots } from "@/lib/format-units.ts";
+import { formatNumber, formatWindKnots } from "@/lib/format-units.ts";
 import type { MapFrame } from "../../api/get-frame.ts";
 import { useJetStreaks } from "../../api/get-jet-streaks.ts";
 import { ISOTACH_FIRST_KNOTS, ISOTACH_STEP_KNOTS } from "../../jet-layers/isotach-levels.ts";
@@ -105,7 +105,9 @@ function ArrowsPart({ frame }: { frame: MapFrame }) {
         <span className="tabular-nums" data-testid="ageostrophic-key">
           {scale ? `${scale.keySpeed} m/s (${formatWindKnots(scale.keySpeed)})` : "…"}
         </span>
-        <span className="text-muted">wind minus geostrophic wind, arrows to scale</span>
+        <span className="text-muted">
+          wind minus geostrophic wind, arrows to scale{scale && `; none drawn below ${formatNumber(scale.slowestDrawn, 1)} m/s`}
+        </span>
       </p>
     </Part>
   );
