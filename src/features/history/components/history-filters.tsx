@@ -6,7 +6,8 @@ import { Button } from "@/components/ui/button.tsx";
 import { SelectField } from "@/components/ui/select-field.tsx";
 import { TextField } from "@/components/ui/text-field.tsx";
 import { isoToUtcInput, utcInputToIso } from "@/lib/time.ts";
-import { useFilterOptions, useRuleVersions } from "../api/get-filter-options.ts";
+import { RuleVersionSelects } from "./rule-version-selects.tsx";
+import { useFilterOptions } from "../api/get-filter-options.ts";
 import { TRIGGER_STATE_LABELS } from "./trigger-state-label.tsx";
 
 interface Draft {
@@ -38,9 +39,8 @@ export function HistoryFilters({ value, acknowledgers, onApply }: { value: Filte
   const [draft, setDraft] = useState<Draft>(() => draftOf(value));
   const [rangeError, setRangeError] = useState<string | null>(null);
   const options = useFilterOptions();
-  const versions = useRuleVersions(draft.ruleId ? Number(draft.ruleId) : undefined);
   const set = (key: keyof Draft) => (event: { target: { value: string } }) =>
-    setDraft((d) => ({ ...d, [key]: event.target.value, ...(key === "ruleId" ? { ruleVersionId: "" } : {}) }));
+    setDraft((d) => ({ ...d, [key]: event.target.value }));
 
   const submit = (event: FormEvent) => {
     event.preventDefault();
@@ -72,23 +72,13 @@ export function HistoryFilters({ value, acknowledgers, onApply }: { value: Filte
       <div className="grid grid-cols-2 gap-3 md:grid-cols-4 xl:grid-cols-8">
         <TextField label="Opened from (UTC)" type="datetime-local" value={draft.from} onChange={set("from")} error={rangeError ?? undefined} />
         <TextField label="Opened to (UTC)" type="datetime-local" value={draft.to} onChange={set("to")} />
-        <SelectField label="Rule" value={draft.ruleId} onChange={set("ruleId")}>
-          <option value="">Every rule</option>
-          {options.data?.rules.map((r) => (
-            <option key={r.id} value={r.id}>
-              {r.name}
-            </option>
-          ))}
-        </SelectField>
-        <SelectField label="Rule version" value={draft.ruleVersionId} onChange={set("ruleVersionId")} disabled={!draft.ruleId}>
-          <option value="">{draft.ruleId ? "Every version" : "Pick a rule first"}</option>
-          {versions.data?.map((v) => (
-            <option key={v.id} value={v.id}>
-              v{v.version}
-              {v.changeNote ? ` — ${v.changeNote}` : ""}
-            </option>
-          ))}
-        </SelectField>
+        <RuleVersionSelects
+          ruleId={draft.ruleId}
+          versionId={draft.ruleVersionId}
+          everyRuleLabel="Every rule"
+          onRule={(ruleId) => setDraft((d) => ({ ...d, ruleId, ruleVersionId: "" }))}
+          onVersion={(ruleVersionId) => setDraft((d) => ({ ...d, ruleVersionId }))}
+        />
         <SelectField label="Zone" value={draft.zoneId} onChange={set("zoneId")}>
           <option value="">Every zone</option>
           {options.data?.zones.map((z) => (

@@ -1,24 +1,11 @@
 import type { HistoryNotificationDto, HistoryTimelineItemDto } from "@shared/api/history.ts";
-import type { TriggerEventKind } from "@shared/api/triggers.ts";
 import { Chip, type Tone } from "@/components/ui/chip.tsx";
 import { Loading } from "@/components/ui/loading.tsx";
 import { Notice } from "@/components/ui/notice.tsx";
 import { Timestamp } from "@/components/ui/timestamp.tsx";
 import { describeError } from "@/lib/describe-error.ts";
+import { EVENT_LABELS } from "@/lib/trigger-words.ts";
 import { useHistoryTrigger } from "../api/get-trigger-history.ts";
-
-const EVENT_LABELS: Record<TriggerEventKind, string> = {
-  opened: "Opened",
-  updated: "Updated by a newer frame",
-  acknowledged: "Acknowledged",
-  commented: "Comment",
-  cleared: "Cleared",
-  expired: "Expired",
-  "false-alarm": "Closed as a false alarm",
-  escalated: "Escalated",
-  notified: "Notified",
-  "notify-failed": "Notification failed",
-};
 
 const CHANNEL_LABELS: Record<string, string> = { email: "E-mail", sms: "Text message" };
 const STATE_TONES: Record<string, Tone> = { sent: "ok", failed: "danger", queued: "caution", sending: "caution", held: "neutral", digested: "neutral" };

@@ -5,7 +5,7 @@ import { Button } from "@/components/ui/button.tsx";
 import { SelectField } from "@/components/ui/select-field.tsx";
 import { TextField } from "@/components/ui/text-field.tsx";
 import { isoToUtcInput, utcInputToIso } from "@/lib/time.ts";
-import { useFilterOptions, useRuleVersions } from "../api/get-filter-options.ts";
+import { RuleVersionSelects } from "./rule-version-selects.tsx";
 
 const SPACE_LABELS: Record<SpaceMode, string> = { zone: "Inside the trigger's zone", area: "Near the area where the rule matched" };
 
@@ -35,10 +35,8 @@ const draftOf = (q: VerificationQuery): Draft => ({
 export function VerificationFilters({ value, onApply }: { value: VerificationQuery; onApply: (query: VerificationQuery) => void }) {
   const [draft, setDraft] = useState<Draft>(() => draftOf(value));
   const [error, setError] = useState<string | null>(null);
-  const options = useFilterOptions();
-  const versions = useRuleVersions(draft.ruleId ? Number(draft.ruleId) : undefined);
   const set = (key: keyof Draft) => (event: { target: { value: string } }) =>
-    setDraft((d) => ({ ...d, [key]: event.target.value, ...(key === "ruleId" ? { ruleVersionId: "" } : {}) }));
+    setDraft((d) => ({ ...d, [key]: event.target.value }));
   const toggleKind = (kind: StormReportKind) =>
     setDraft((d) => ({ ...d, kinds: d.kinds.includes(kind) ? d.kinds.filter((k) => k !== kind) : STORM_REPORT_KINDS.filter((k) => k === kind || d.kinds.includes(k)) }));
 
@@ -71,23 +69,13 @@ export function VerificationFilters({ value, onApply }: { value: VerificationQue
       <div className="grid grid-cols-2 gap-3 md:grid-cols-4">
         <TextField label="Valid from (UTC)" type="datetime-local" value={draft.from} onChange={set("from")} error={error ?? undefined} />
         <TextField label="Valid to (UTC)" type="datetime-local" value={draft.to} onChange={set("to")} />
-        <SelectField label="Rule" value={draft.ruleId} onChange={set("ruleId")}>
-          <option value="">Every rule together</option>
-          {options.data?.rules.map((r) => (
-            <option key={r.id} value={r.id}>
-              {r.name}
-            </option>
-          ))}
-        </SelectField>
-        <SelectField label="Version" value={draft.ruleVersionId} onChange={set("ruleVersionId")} disabled={!draft.ruleId}>
-          <option value="">{draft.ruleId ? "Every version" : "Pick a rule first"}</option>
-          {versions.data?.map((v) => (
-            <option key={v.id} value={v.id}>
-              v{v.version}
-              {v.changeNote ? ` — ${v.changeNote}` : ""}
-            </option>
-          ))}
-        </SelectField>
+        <RuleVersionSelects
+          ruleId={draft.ruleId}
+          versionId={draft.ruleVersionId}
+          everyRuleLabel="Every rule together"
+          onRule={(ruleId) => setDraft((d) => ({ ...d, ruleId, ruleVersionId: "" }))}
+          onVersion={(ruleVersionId) => setDraft((d) => ({ ...d, ruleVersionId }))}
+        />
         <SelectField label="A report counts when it lies" value={draft.space} onChange={set("space")}>
           {SPACE_MODES.map((mode) => (
             <option key={mode} value={mode}>
