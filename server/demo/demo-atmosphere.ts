@@ -98,6 +98,8 @@ export function demoFrameFields(geometry: LambertGeometry, hour: number): DemoFr
     surfaceHeight: new Float32Array(n),
   };
   const { lat } = gridCoordinates(geometry);
+  const hydrostatic = new Float32Array(levels * n);
+  const upperWeight = new Float32Array(levels * n);
   const jet = jetStreakAt(hour);
   const cosA = Math.cos(jet.angle);
   const sinA = Math.sin(jet.angle);
@@ -211,8 +213,20 @@ export function demoFrameFields(geometry: LambertGeometry, hour: number): DemoFr
         out.dewpoint[index] = td;
         out.u[index] = ub + jetWeight * uJet;
         out.v[index] = vb + jetWeight * vJet;
-        out.height[index] = zMsl + upper * balance + jetWeight * (f / STANDARD_GRAVITY) * streamfunction;
+        hydrostatic[index] = zMsl;
+        upperWeight[index] = upper;
+        out.height[index] = upper * balance + jetWeight * (f / STANDARD_GRAVITY) * streamfunction;
       }
+    }
+  }
+  // Aloft, heights follow the level's domain mean plus the balanced parts above: the invented
+  // temperature contrasts would otherwise add thermal winds that the invented winds do not have.
+  for (let L = 0; L < levels; L++) {
+    let mean = 0;
+    for (let p = 0; p < n; p++) mean += hydrostatic[L * n + p]! / n;
+    for (let p = 0; p < n; p++) {
+      const index = L * n + p;
+      out.height[index] = out.height[index]! + (1 - upperWeight[index]!) * hydrostatic[index]! + upperWeight[index]! * mean;
     }
   }
   return out;
