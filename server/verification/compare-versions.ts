@@ -7,7 +7,7 @@ import { gridCoordinates } from "../../shared/grid/grid-coordinates.ts";
 import { decodeMaskBits } from "../../shared/grid/mask-bits.ts";
 import type { ZoneGeometry } from "../../shared/zones/zone-geometry.ts";
 import { matchReportsToTriggers } from "../../shared/verification/match-reports.ts";
-import { anyPointWithinKm, joinPoints, pointsOfMask, type MatchedPoints } from "../../shared/verification/matched-points.ts";
+import { anySetWithinKm, pointsOfMask, type MatchedPoints } from "../../shared/verification/matched-points.ts";
 import { GridFrameEntity } from "../entities/grid-frame.entity.ts";
 import { ZoneEntity } from "../entities/zone.entity.ts";
 import { NotFoundError } from "../errors.ts";
@@ -161,14 +161,19 @@ async function simulatedSpaceTest(
   };
   const pairs = new Set<string>();
   const reach = Math.max(options.windowHours, 0.5) * HOUR_MS;
+  const windowMs = options.windowHours * HOUR_MS;
   for (const [t, trigger] of simulated.entries()) {
+    const frames = trigger.frameIds.map((id) => ({ id, validTime: frameMasks.get(id)!.validTime }));
+    const first = Date.parse(trigger.firstValidTime) - windowMs;
+    const last = Date.parse(trigger.lastValidTime) + windowMs;
     for (const [r, report] of reports.entries()) {
       const time = Date.parse(report.time);
-      const withFrames = trigger.frameIds.map((id) => ({ id, validTime: frameMasks.get(id)!.validTime }));
-      let chosen = withFrames.filter((f) => Math.abs(f.validTime - time) <= reach);
-      if (chosen.length === 0) chosen = [withFrames.reduce((a, b) => (Math.abs(b.validTime - time) < Math.abs(a.validTime - time) ? b : a))];
-      const points = joinPoints(await Promise.all(chosen.map((f) => areaOf(f.id, trigger.zoneId))));
-      if (anyPointWithinKm(points, report.latitude, report.longitude, options.distanceKm)) pairs.add(`${t}:${r}`);
+      // Pairs the time test will refuse anyway need no area.
+      if (time < first || time > last) continue;
+      let chosen = frames.filter((f) => Math.abs(f.validTime - time) <= reach);
+      if (chosen.length === 0) chosen = [frames.reduce((a, b) => (Math.abs(b.validTime - time) < Math.abs(a.validTime - time) ? b : a))];
+      const sets = await Promise.all(chosen.map((f) => areaOf(f.id, trigger.zoneId)));
+      if (anySetWithinKm(sets, report.latitude, report.longitude, options.distanceKm)) pairs.add(`${t}:${r}`);
     }
   }
   return (t, r) => pairs.has(`${t}:${r}`);

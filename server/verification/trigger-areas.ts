@@ -2,7 +2,7 @@ import type { DataSource } from "typeorm";
 import type { GridGeometry } from "../../shared/grid/geometry-types.ts";
 import { gridCoordinates } from "../../shared/grid/grid-coordinates.ts";
 import { decodeMaskBits } from "../../shared/grid/mask-bits.ts";
-import { joinPoints, pointsOfMask, type MatchedPoints } from "../../shared/verification/matched-points.ts";
+import { pointsOfMask, type MatchedPoints } from "../../shared/verification/matched-points.ts";
 import { RuleEvaluationEntity } from "../entities/rule-evaluation.entity.ts";
 import type { RuleMapService } from "../rules/rule-map.service.ts";
 import { NotFoundError } from "../errors.ts";
@@ -48,9 +48,9 @@ export class TriggerAreas {
 
   /**
    * The matched points of the trigger's frames valid within `windowHours` of the report time (the
-   * nearest frame when none is); null when any needed frame can no longer be rebuilt.
+   * nearest frame when none is), one set per frame; null when any needed frame can no longer be rebuilt.
    */
-  async near(triggerId: number, reportTime: number, windowHours: number): Promise<MatchedPoints | null> {
+  async near(triggerId: number, reportTime: number, windowHours: number): Promise<MatchedPoints[] | null> {
     const frames = this.frames.get(triggerId) ?? [];
     if (frames.length === 0) return null;
     const reach = Math.max(windowHours, 0.5) * HOUR_MS;
@@ -65,7 +65,7 @@ export class TriggerAreas {
       if (points === null) return null;
       sets.push(points);
     }
-    return sets.length === 1 ? sets[0]! : joinPoints(sets);
+    return sets;
   }
 
   private async frameArea(triggerId: number, frameId: number): Promise<MatchedPoints | null> {

@@ -13,7 +13,7 @@ import type { RuleDefinition } from "../../shared/api/rules.ts";
 import { STORM_REPORT_KINDS } from "../../shared/storm-reports/storm-report-kinds.ts";
 import type { ZoneGeometry } from "../../shared/zones/zone-geometry.ts";
 import { matchReportsToTriggers, type MatchResult, type TriggerToMatch } from "../../shared/verification/match-reports.ts";
-import { anyPointWithinKm } from "../../shared/verification/matched-points.ts";
+import { anySetWithinKm } from "../../shared/verification/matched-points.ts";
 import { TriggerEntity } from "../entities/trigger.entity.ts";
 import { RuleEntity } from "../entities/rule.entity.ts";
 import { RuleVersionEntity } from "../entities/rule-version.entity.ts";
@@ -161,7 +161,7 @@ export class VerificationService {
           if (time < Date.parse(t.firstValidTime) - windowMs || time > Date.parse(t.lastValidTime) + windowMs) continue;
           const points = await this.areas.near(t.id, time, options.windowHours);
           if (points === null) zoneFallbacks.add(t.id);
-          const isNear = points === null ? byZone(t, r) : anyPointWithinKm(points, r.latitude, r.longitude, options.distanceKm);
+          const isNear = points === null ? byZone(t, r) : anySetWithinKm(points, r.latitude, r.longitude, options.distanceKm);
           if (isNear) areaNear.add(`${t.id}:${r.id}`);
         }
       }

@@ -21,19 +21,6 @@ export function pointsOfMask(mask: ArrayLike<number>, lat: ArrayLike<number>, lo
   return out;
 }
 
-/** Joins several point sets into one (duplicates are harmless for a distance test). */
-export function joinPoints(sets: readonly MatchedPoints[]): MatchedPoints {
-  const total = sets.reduce((n, s) => n + s.lat.length, 0);
-  const out = { lat: new Float32Array(total), lon: new Float32Array(total) };
-  let offset = 0;
-  for (const s of sets) {
-    out.lat.set(s.lat, offset);
-    out.lon.set(s.lon, offset);
-    offset += s.lat.length;
-  }
-  return out;
-}
-
 /**
  * True when any point lies within `km` of (lat, lon), by great-circle distance (haversine). A
  * cheap latitude/longitude box is checked first so most points never reach the trigonometry.
@@ -48,4 +35,9 @@ export function anyPointWithinKm(points: MatchedPoints, lat: number, lon: number
     if (greatCircleKm(lat, lon, pLat, pLon) <= km) return true;
   }
   return false;
+}
+
+/** True when a point of any of the sets lies within `km` (the sets are checked in turn, nothing is copied). */
+export function anySetWithinKm(sets: readonly MatchedPoints[], lat: number, lon: number, km: number): boolean {
+  return sets.some((points) => anyPointWithinKm(points, lat, lon, km));
 }
