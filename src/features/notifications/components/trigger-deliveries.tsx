@@ -17,8 +17,8 @@ import { channelLabel, deliverySummary, reasonLabel, resultOf } from "../deliver
 
 function WhenCell({ n }: { n: NotificationDto }) {
   if (n.state === "sent") return <Timestamp value={n.sentAt} />;
-  if (n.state === "held") return <span className="text-xs text-muted">until <Timestamp value={n.heldUntil} /></span>;
-  if (n.state === "queued" && n.attempts > 0) return <span className="text-xs text-muted">next try <Timestamp value={n.nextAttemptAt} /></span>;
+  if (n.state === "held") return <span>until <Timestamp value={n.heldUntil} /></span>;
+  if (n.state === "queued" && n.attempts > 0) return <span>next try <Timestamp value={n.nextAttemptAt} /></span>;
   return <Timestamp value={n.createdAt} />;
 }
 
@@ -75,64 +75,41 @@ export function TriggerDeliveries({ triggerId }: { triggerId: number }) {
       )}
       {deliveries.data && list.length === 0 && <p className="text-muted">No message was written for this trigger. Its events say why.</p>}
       {list.length > 0 && (
-        <div className="overflow-x-auto">
-          <table className="w-full text-left text-sm" data-testid="trigger-deliveries">
-            <caption className="sr-only">Messages sent about trigger {triggerId}</caption>
-            <thead className="border-b border-line text-xs text-muted">
-              <tr>
-                <th scope="col" className="py-1.5 pr-3 font-medium">Recipient</th>
-                <th scope="col" className="py-1.5 pr-3 font-medium">Channel</th>
-                <th scope="col" className="py-1.5 pr-3 font-medium">Why</th>
-                <th scope="col" className="py-1.5 pr-3 font-medium">Result</th>
-                <th scope="col" className="py-1.5 pr-3 font-medium">When</th>
-                <th scope="col" className="py-1.5 pr-3 font-medium">Attempts</th>
-                {canResend && <th scope="col" className="py-1.5 font-medium"><span className="sr-only">Actions</span></th>}
-              </tr>
-            </thead>
-            <tbody>
-              {list.map((n) => {
-                const result = resultOf(n);
-                return (
-                  <tr key={n.id} className="border-b border-line/60 align-top last:border-0">
-                    <td className="py-1.5 pr-3">
-                      <div>{n.recipientName}</div>
-                      <div className="font-mono text-xs text-muted">{n.address}</div>
-                    </td>
-                    <td className="py-1.5 pr-3 whitespace-nowrap">{channelLabel(n)}</td>
-                    <td className="py-1.5 pr-3 whitespace-nowrap">{reasonLabel(n)}</td>
-                    <td className="py-1.5 pr-3">
-                      <Chip tone={result.tone}>{result.label}</Chip>
-                    </td>
-                    <td className="py-1.5 pr-3">
-                      <WhenCell n={n} />
-                    </td>
-                    <td className="py-1.5 pr-3">
-                      <AttemptLog n={n} />
-                    </td>
-                    {canResend && (
-                      <td className="py-1.5 text-right">
-                        {n.state === "failed" && (
-                          <Button
-                            size="sm"
-                            disabled={resend.isPending}
-                            onClick={() =>
-                              resend.mutate(n.id, {
-                                onSuccess: () => toast.success("Queued again", `${channelLabel(n)} to ${n.recipientName}`),
-                                onError: (error) => toast.error("Could not queue it again", describeErrorLine(error)),
-                              })
-                            }
-                          >
-                            Send again
-                          </Button>
-                        )}
-                      </td>
-                    )}
-                  </tr>
-                );
-              })}
-            </tbody>
-          </table>
-        </div>
+        // A list rather than a table: the trigger page shows this in a narrow column.
+        <ul className="flex flex-col" data-testid="trigger-deliveries" aria-label={`Messages sent about trigger ${triggerId}`}>
+          {list.map((n) => {
+            const result = resultOf(n);
+            return (
+              <li key={n.id} className="border-b border-line/60 py-2 text-sm last:border-0">
+                <div className="flex items-start justify-between gap-2">
+                  <span className="min-w-0 font-medium">{n.recipientName}</span>
+                  <Chip tone={result.tone}>{result.label}</Chip>
+                </div>
+                <div className="text-xs text-muted">
+                  {channelLabel(n)} · {reasonLabel(n)} · <WhenCell n={n} />
+                </div>
+                <div className="font-mono text-xs break-all text-muted">{n.address}</div>
+                <div className="mt-0.5 flex items-start justify-between gap-2">
+                  <AttemptLog n={n} />
+                  {canResend && n.state === "failed" && (
+                    <Button
+                      size="sm"
+                      disabled={resend.isPending}
+                      onClick={() =>
+                        resend.mutate(n.id, {
+                          onSuccess: () => toast.success("Queued again", `${channelLabel(n)} to ${n.recipientName}`),
+                          onError: (error) => toast.error("Could not queue it again", describeErrorLine(error)),
+                        })
+                      }
+                    >
+                      Send again
+                    </Button>
+                  )}
+                </div>
+              </li>
+            );
+          })}
+        </ul>
       )}
     </Panel>
   );
