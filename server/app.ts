@@ -22,6 +22,9 @@ import { createAuthRouter } from "./routes/auth.router.ts";
 import { createUsersRouter } from "./routes/users.router.ts";
 import { createAuditRouter } from "./routes/audit.router.ts";
 import { createNotificationRouters } from "./routes/notifications.router.ts";
+import { createHistoryRouter } from "./routes/history.router.ts";
+import { createStormReportsRouter } from "./routes/storm-reports.router.ts";
+import { createVerificationRouter } from "./routes/verification.router.ts";
 
 export interface AppDeps {
   services: Services;
@@ -92,6 +95,9 @@ export function createApp(deps: AppDeps): BellwetherApp {
   app.use("/api/triggers", createTriggersRouter(services.triggers, services.ruleMaps, routes));
   app.use("/api/timeline", createTimelineRouter(services.triggers, routes));
   for (const [prefix, router] of createNotificationRouters({ notify: services.notify, config, dataSource }, routes)) app.use(prefix, router);
+  app.use("/api/history", createHistoryRouter(services.history, routes));
+  app.use("/api/storm-reports", createStormReportsRouter(services.stormReports, routes));
+  app.use("/api/verification", createVerificationRouter(services.verification, routes));
   app.use("/api", apiNotFound);
 
   if (deps.clientDir && fs.existsSync(path.join(deps.clientDir, "index.html"))) {

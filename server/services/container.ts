@@ -18,6 +18,9 @@ import { decodeGridFile } from "../ingest/decode-file.ts";
 import { inProcessColumnDiagnoser, poolColumnDiagnoser } from "../ingest/column-diagnoser.ts";
 import { ColumnDiagnosticsPool } from "../diagnostics/column-pool.ts";
 import os from "node:os";
+import { StormReportService } from "../storm-reports/storm-report.service.ts";
+import { HistoryService } from "../history/history.service.ts";
+import { VerificationService } from "../verification/verification.service.ts";
 
 /** Every long-lived service of one running Bellwether, built once and handed to routes and jobs. */
 export interface Services {
@@ -35,6 +38,9 @@ export interface Services {
   ruleMaps: RuleMapService;
   /** Contacts, on-call, the notification outbox and its dispatcher, escalation, digests and the local fakes. */
   notify: NotifyServices;
+  stormReports: StormReportService;
+  history: HistoryService;
+  verification: VerificationService;
   /** Releases worker threads and other resources. */
   close(): Promise<void>;
 }
@@ -68,6 +74,8 @@ export function createServices(config: AppConfig, dataSource: DataSource, logger
     onFrameReady: (frameId) => evaluation.enqueue(frameId),
   });
   const ingest = new IngestService({ dataSource, dataDir: config.dataDir, events, logger, processor });
+  const ruleMaps = new RuleMapService(dataSource, config.dataDir, rules, zones);
+  const stormReports = new StormReportService(dataSource, now);
   return {
     config,
     dataSource,
@@ -81,7 +89,10 @@ export function createServices(config: AppConfig, dataSource: DataSource, logger
     triggers,
     evaluation,
     notify,
-    ruleMaps: new RuleMapService(dataSource, config.dataDir, rules, zones),
+    ruleMaps,
+    stormReports,
+    history: new HistoryService(dataSource, triggers),
+    verification: new VerificationService(dataSource, { rules, zones, maps: ruleMaps, reports: stormReports }),
     async close() {
       await ingest.stop();
       await evaluation.stop();

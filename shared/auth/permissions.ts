@@ -21,6 +21,13 @@ export const PERMISSIONS = {
   "users.write": ["admin"],
   "audit.read": ["manager", "admin"],
   "audit.verify": ["manager", "admin"],
+  "audit.export": ["manager", "admin"],
+  "history.read": ["manager", "admin"],
+  // Storm reports are ground truth everyone sees on maps and the timeline; leads and managers load them.
+  "reports.read": EVERYONE,
+  "reports.upload": ["lead", "manager"],
+  "verification.read": ["lead", "manager", "admin"],
+  "verification.compare": ["lead", "manager"],
   "soundings.diagnose": EVERYONE,
   "catalogue.read": EVERYONE,
   "grids.read": EVERYONE,

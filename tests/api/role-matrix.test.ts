@@ -45,6 +45,29 @@ const EXAMPLES: Record<string, Example> = {
   "post /api/users/:id/password": { path: "/api/users/2/password", body: () => ({ password: "another-password-1" }) },
   "get /api/audit/": { path: "/api/audit?page=1&pageSize=5" },
   "get /api/audit/verify": { path: "/api/audit/verify" },
+  "get /api/audit/export.csv": { path: "/api/audit/export.csv?action=user." },
+  "get /api/history/triggers": { path: "/api/history/triggers?severity=serious" },
+  "get /api/history/triggers.csv": { path: "/api/history/triggers.csv?ruleId=1" },
+  "get /api/history/triggers/:id": { path: "/api/history/triggers/1" },
+  "get /api/storm-reports/": { path: "/api/storm-reports?kind=hail" },
+  "post /api/storm-reports/": {
+    path: "/api/storm-reports",
+    // A new place each time, so every cell stores a report rather than finding a duplicate.
+    body: () => ({ csv: `time_utc,latitude,longitude,kind,magnitude,magnitude_unit,remarks\n2026-05-14T21:35Z,${30 + ++counter * 0.1},-97.4,hail,1,in,matrix`, fileName: "matrix.csv" }),
+  },
+  "get /api/verification/": { path: "/api/verification?from=2000-01-01T00:00:00Z&to=2100-01-01T00:00:00Z&ruleId=1" },
+  "get /api/verification/compare": {
+    path: "",
+    prepare: async () => {
+      // Two versions of rule 1 to compare; other cells may already have added some.
+      let versions = await server.services.rules.versions(1);
+      if (versions.length < 2) {
+        await server.services.rules.update(SYSTEM_ACTOR, 1, { ...RULE({ description: `Compare ${++counter}` }), changeNote: "matrix" } as never);
+        versions = await server.services.rules.versions(1);
+      }
+      return `/api/verification/compare?ruleId=1&versionA=${versions[1]!.id}&versionB=${versions[0]!.id}&runs=1`;
+    },
+  },
   "post /api/grids/": { path: "/api/grids", attach: () => ["file", fakeGribBytes(`matrix-${++counter}`), "matrix.grib2"] },
   "get /api/grids/jobs": { path: "/api/grids/jobs" },
   "get /api/grids/jobs/:id": { path: "/api/grids/jobs/1" },
