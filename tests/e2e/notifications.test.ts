@@ -3,6 +3,7 @@ import type { Browser, Page } from "playwright-core";
 import { launchBrowser, screenshot } from "./helpers/browser.ts";
 import { startE2eServer, E2E_PASSWORD } from "./helpers/server.ts";
 import { signInThroughPage } from "./helpers/sign-in.ts";
+import { insertOpenTrigger } from "../helpers/test-server.ts";
 import { writeTransaction } from "../../server/db/data-source.ts";
 import { TriggerEntity } from "../../server/entities/trigger.entity.ts";
 import { RuleEntity } from "../../server/entities/rule.entity.ts";
@@ -24,32 +25,8 @@ beforeAll(async () => {
   chromium = await launchBrowser();
   browser = chromium.browser;
   const rule = (await server.dataSource.getRepository(RuleEntity).find({ order: { id: "ASC" } })).find((r) => r.name === "Supercell ingredients")!;
-  const at = new Date().toISOString();
-  triggerId = await writeTransaction(server.dataSource, async (m) => {
-    const trigger = await m.getRepository(TriggerEntity).save({
-      triggerKey: `e2e-${Date.now()}`,
-      ruleId: rule.id,
-      ruleVersionId: rule.currentVersionId!,
-      zoneId: 1,
-      severity: "serious",
-      state: "open",
-      model: "e2e",
-      runTime: at,
-      firstValidTime: at,
-      lastValidTime: at,
-      matchedValidTimes: JSON.stringify([at]),
-      peak: JSON.stringify({ coveragePercent: 40, matchedPoints: 12, fields: [{ key: "mlcape", max: 2100, min: 1100, mean: 1500 }] }),
-      openedAt: at,
-      updatedAt: at,
-      acknowledgedBy: null,
-      acknowledgedAt: null,
-      closedAt: null,
-      closedBy: null,
-      closeReason: null,
-    });
-    await server.services.notify.notifier.onTriggerChange(m, trigger, "opened");
-    return trigger.id;
-  });
+  triggerId = await insertOpenTrigger(server, rule.id, 1);
+  await writeTransaction(server.dataSource, async (m) => server.services.notify.notifier.onTriggerChange(m, await m.getRepository(TriggerEntity).findOneByOrFail({ id: triggerId }), "opened"));
   await server.services.notify.dispatcher.settle();
   // This trigger has no stored frame, so its e-mail carries no map; one more e-mail with a drawn map
   // checks that the inbox page shows attached images.

@@ -82,7 +82,7 @@ export async function ingestBytes(server: TestServer, bytes: Buffer, name: strin
 
 let fixtureTriggers = 0;
 /** An open trigger row made directly, for tests that need one to act on (the engine's own path is tested elsewhere). */
-export async function insertOpenTrigger(server: TestServer, ruleId: number, zoneId: number): Promise<number> {
+export async function insertOpenTrigger(server: Pick<TestServer, "dataSource">, ruleId: number, zoneId: number): Promise<number> {
   const { TriggerEntity } = await import("../../server/entities/trigger.entity.ts");
   const { RuleEntity } = await import("../../server/entities/rule.entity.ts");
   const rule = await server.dataSource.getRepository(RuleEntity).findOneByOrFail({ id: ruleId });

@@ -31,7 +31,7 @@ export function changeLabel(change: NotifyChange, level: number | null): string 
     case "severity-rose":
       return "Severity rose";
     case "escalated":
-      return `Escalation, level ${level ?? 1}: not acknowledged yet`;
+      return `Escalation, level ${level ?? 1} (not acknowledged yet)`;
     case "digest":
       return "Digest";
   }

@@ -5,10 +5,10 @@ import { Chip } from "@/components/ui/chip.tsx";
 import { Loading } from "@/components/ui/loading.tsx";
 import { Notice } from "@/components/ui/notice.tsx";
 import { Panel } from "@/components/ui/panel.tsx";
-import { useToast } from "@/components/ui/toaster.tsx";
-import { describeError, describeErrorLine } from "@/lib/describe-error.ts";
+import { describeError } from "@/lib/describe-error.ts";
 import { useContacts, useDeleteContact, useGroups } from "../api/contacts.ts";
 import { channelLabel } from "../delivery-words.ts";
+import { ConfirmDeleteButton } from "./confirm-delete-button.tsx";
 import { ContactDialog } from "./contact-dialog.tsx";
 
 function quietText(c: ContactDto): string {
@@ -24,7 +24,6 @@ export function ContactsPanel({ canWrite, canLinkAccounts, officeTimeZone }: { c
   const contacts = useContacts();
   const groups = useGroups();
   const remove = useDeleteContact();
-  const toast = useToast();
   const [editing, setEditing] = useState<ContactDto | "new" | null>(null);
 
   return (
@@ -67,21 +66,7 @@ export function ContactsPanel({ canWrite, canLinkAccounts, officeTimeZone }: { c
                       <Button size="sm" variant="ghost" onClick={() => setEditing(c)} aria-label={`Edit ${c.name}`}>
                         Edit
                       </Button>
-                      <Button
-                        size="sm"
-                        variant="danger"
-                        aria-label={`Delete ${c.name}`}
-                        disabled={remove.isPending}
-                        onClick={() => {
-                          if (!window.confirm(`Delete the contact ${c.name}?`)) return;
-                          remove.mutate(c.id, {
-                            onSuccess: () => toast.success("Contact deleted", c.name),
-                            onError: (error) => toast.error("Contact not deleted", describeErrorLine(error)),
-                          });
-                        }}
-                      >
-                        Delete
-                      </Button>
+                      <ConfirmDeleteButton id={c.id} what="Contact" label={`Delete ${c.name}`} mutation={remove} />
                     </td>
                   )}
                 </tr>

@@ -4,9 +4,9 @@ import { Button } from "@/components/ui/button.tsx";
 import { Loading } from "@/components/ui/loading.tsx";
 import { Notice } from "@/components/ui/notice.tsx";
 import { Panel } from "@/components/ui/panel.tsx";
-import { useToast } from "@/components/ui/toaster.tsx";
-import { describeError, describeErrorLine } from "@/lib/describe-error.ts";
+import { describeError } from "@/lib/describe-error.ts";
 import { useContacts, useDeleteGroup, useGroups } from "../api/contacts.ts";
+import { ConfirmDeleteButton } from "./confirm-delete-button.tsx";
 import { GroupDialog } from "./group-dialog.tsx";
 
 /** Contact groups and their members. */
@@ -14,7 +14,6 @@ export function GroupsPanel({ canWrite }: { canWrite: boolean }) {
   const groups = useGroups();
   const contacts = useContacts();
   const remove = useDeleteGroup();
-  const toast = useToast();
   const [editing, setEditing] = useState<GroupDto | "new" | null>(null);
   const nameOf = (id: number) => contacts.data?.find((c) => c.id === id)?.name ?? `#${id}`;
 
@@ -36,18 +35,7 @@ export function GroupsPanel({ canWrite }: { canWrite: boolean }) {
                 <Button size="sm" variant="ghost" onClick={() => setEditing(g)} aria-label={`Edit ${g.name}`}>
                   Edit
                 </Button>
-                <Button
-                  size="sm"
-                  variant="danger"
-                  aria-label={`Delete ${g.name}`}
-                  disabled={remove.isPending}
-                  onClick={() => {
-                    if (!window.confirm(`Delete the group ${g.name}?`)) return;
-                    remove.mutate(g.id, { onSuccess: () => toast.success("Group deleted", g.name), onError: (error) => toast.error("Group not deleted", describeErrorLine(error)) });
-                  }}
-                >
-                  Delete
-                </Button>
+                <ConfirmDeleteButton id={g.id} what="Group" label={`Delete the group ${g.name}`} mutation={remove} />
               </div>
             )}
           </li>

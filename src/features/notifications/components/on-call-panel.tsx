@@ -6,11 +6,11 @@ import { Loading } from "@/components/ui/loading.tsx";
 import { Notice } from "@/components/ui/notice.tsx";
 import { Panel } from "@/components/ui/panel.tsx";
 import { Timestamp } from "@/components/ui/timestamp.tsx";
-import { useToast } from "@/components/ui/toaster.tsx";
 import { useNow } from "@/hooks/use-now.ts";
-import { describeError, describeErrorLine } from "@/lib/describe-error.ts";
+import { describeError } from "@/lib/describe-error.ts";
 import { useContacts } from "../api/contacts.ts";
 import { useDeleteShift, useShifts } from "../api/on-call.ts";
+import { ConfirmDeleteButton } from "./confirm-delete-button.tsx";
 import { ShiftDialog } from "./shift-dialog.tsx";
 
 const DAY = 86_400_000;
@@ -25,7 +25,6 @@ export function OnCallPanel({ canWrite }: { canWrite: boolean }) {
   const shifts = useShifts(span.from, span.to);
   const contacts = useContacts(canWrite);
   const remove = useDeleteShift();
-  const toast = useToast();
   const [editing, setEditing] = useState<ShiftDto | "new" | null>(null);
 
   const nowIso = now.toISOString();
@@ -75,18 +74,7 @@ export function OnCallPanel({ canWrite }: { canWrite: boolean }) {
                         <Button size="sm" variant="ghost" onClick={() => setEditing(s)} aria-label={`Edit the shift of ${s.contactName} from ${s.startsAt}`}>
                           Edit
                         </Button>
-                        <Button
-                          size="sm"
-                          variant="danger"
-                          disabled={remove.isPending}
-                          aria-label={`Delete the shift of ${s.contactName} from ${s.startsAt}`}
-                          onClick={() => {
-                            if (!window.confirm(`Delete this shift of ${s.contactName}?`)) return;
-                            remove.mutate(s.id, { onSuccess: () => toast.success("Shift deleted"), onError: (error) => toast.error("Shift not deleted", describeErrorLine(error)) });
-                          }}
-                        >
-                          Delete
-                        </Button>
+                        <ConfirmDeleteButton id={s.id} what="Shift" label={`Delete the shift of ${s.contactName} from ${s.startsAt}`} mutation={remove} />
                       </span>
                     )}
                   </li>
