@@ -108,6 +108,12 @@ describe("a trigger's messages arrive in the local fakes", () => {
     expect((await rowsOf(trigger!.id)).length).toBe(before);
     expect(before).toBe(2);
     expect(await eventsOf(trigger!.id, "notify-failed")).toEqual([]);
+
+    // A rise in severity is news again, once per new severity.
+    trigger!.severity = "urgent";
+    for (let i = 0; i < 2; i++) await writeTransaction(server.dataSource, (m) => server.services.notify.notifier.onTriggerChange(m, trigger!, "severity-rose"));
+    const rows = await rowsOf(trigger!.id);
+    expect(rows.map((r) => r.idempotencyKey).slice(2)).toEqual([`t${trigger!.id}.rose-urgent.c${dutyId}.email`, `t${trigger!.id}.rose-urgent.c${dutyId}.sms`]);
   });
 
   it("marks a trigger that reaches nobody instead of dropping it silently", async () => {
