@@ -182,6 +182,27 @@ export function RuleEditorForm({ rule, canEdit, zones, recipients, saving, saveE
                   />
                 )}
               />
+              <Controller
+                control={form.control}
+                name="escalateAfterMinutes"
+                render={({ field }) => (
+                  <TextField
+                    label="Escalate after (minutes)"
+                    mono
+                    inputMode="numeric"
+                    autoComplete="off"
+                    className="w-48"
+                    value={field.value ?? ""}
+                    disabled={disabled}
+                    error={messageFor("escalateAfterMinutes")}
+                    hint="If nobody acknowledges a trigger by then, the lead on shift is told. Empty: the office default."
+                    onChange={(event) => {
+                      const text = event.target.value.trim();
+                      field.onChange(text === "" ? undefined : Number(text));
+                    }}
+                  />
+                )}
+              />
               <label className="flex items-center gap-2">
                 <input type="checkbox" role="switch" {...form.register("enabled")} />
                 Switched on (checked on every new frame)
