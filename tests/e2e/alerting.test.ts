@@ -5,7 +5,7 @@ import { afterAll, beforeAll, beforeEach, describe, expect, it, onTestFailed } f
 import type { Browser, BrowserContext, Page } from "playwright-core";
 import { defaultDemoRun, writeDemoRun } from "../../server/demo/demo-run.ts";
 import { launchBrowser, screenshot } from "./helpers/browser.ts";
-import { startE2eServer, E2E_PASSWORD } from "./helpers/server.ts";
+import { startE2eServer, E2E_PASSWORD, submitFromInbox } from "./helpers/server.ts";
 import { signInThroughPage } from "./helpers/sign-in.ts";
 
 /**
@@ -120,7 +120,7 @@ describe("rule → frame → live trigger → keyboard acknowledgement", () => {
     await forecaster.evaluate(() => ((window as unknown as { stillThisPage: boolean }).stillThisPage = true));
     await screenshot(forecaster, "timeline-empty");
 
-    await server.services.ingest.submitFile(demoFile, { originalName: path.basename(demoFile), source: "inbox", submittedBy: null });
+    await submitFromInbox(server, demoFile);
 
     // The lead's side sees the trigger through the API; note when it first shows there.
     let openedSeenAt = 0;

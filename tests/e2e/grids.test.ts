@@ -5,7 +5,7 @@ import { afterAll, beforeAll, beforeEach, describe, expect, it, onTestFailed } f
 import type { Browser, BrowserContext, Page } from "playwright-core";
 import { writeDemoRun } from "../../server/demo/demo-run.ts";
 import { launchBrowser, screenshot } from "./helpers/browser.ts";
-import { startE2eServer, E2E_PASSWORD } from "./helpers/server.ts";
+import { startE2eServer, E2E_PASSWORD, submitFromInbox } from "./helpers/server.ts";
 import { signInThroughPage } from "./helpers/sign-in.ts";
 
 /**
@@ -82,7 +82,7 @@ describe("grids and the map in a real browser", () => {
     await page.getByLabel("Upload grid files…").setInputFiles(demoFiles[0]!);
     await page.getByText(`${path.basename(demoFiles[0]!)} received`).waitFor();
     // The other as if it had landed in the inbox folder.
-    await server.services.ingest.submitFile(demoFiles[1]!, { originalName: path.basename(demoFiles[1]!), source: "inbox", submittedBy: null });
+    await submitFromInbox(server, demoFiles[1]!);
 
     const jobs = panel(page, "Ingest jobs");
     await jobs.getByText("Diagnosing", { exact: true }).first().waitFor({ timeout: 60_000 });

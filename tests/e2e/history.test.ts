@@ -3,7 +3,7 @@ import path from "node:path";
 import { afterAll, beforeAll, beforeEach, describe, expect, it, onTestFailed } from "vitest";
 import type { Browser, BrowserContext, Page } from "playwright-core";
 import { launchBrowser, screenshot, SCREENSHOT_DIR } from "./helpers/browser.ts";
-import { startE2eServer, E2E_PASSWORD } from "./helpers/server.ts";
+import { startE2eServer, E2E_PASSWORD, submitFromInbox } from "./helpers/server.ts";
 import { signInThroughPage } from "./helpers/sign-in.ts";
 import { splitCsvRecords } from "../../shared/csv/csv-text.ts";
 import { STORM_REPORT_CSV_HEADER } from "../../shared/storm-reports/storm-report-csv.ts";
@@ -63,7 +63,7 @@ beforeAll(async () => {
   server = await startE2eServer();
   // The demo run is written into the inbox on start; with jobs off, feed it to the ingest service here.
   const files = await waitForFiles(server.config.inboxDir, 9, 120_000);
-  for (const file of files) await server.services.ingest.submitFile(file, { originalName: path.basename(file), source: "inbox", submittedBy: null });
+  for (const file of files) await submitFromInbox(server, file);
   await server.services.ingest.idle();
   await server.services.evaluation.idle();
   chromium = await launchBrowser();

@@ -5,7 +5,7 @@ import { afterAll, beforeAll, beforeEach, describe, expect, it, onTestFailed } f
 import type { Browser, BrowserContext, Locator, Page } from "playwright-core";
 import { demoFileName, demoGribFile } from "../../server/demo/demo-run.ts";
 import { launchBrowser, SCREENSHOT_DIR, screenshot } from "./helpers/browser.ts";
-import { startE2eServer, E2E_PASSWORD } from "./helpers/server.ts";
+import { startE2eServer, E2E_PASSWORD, submitFromInbox } from "./helpers/server.ts";
 import { signInThroughPage } from "./helpers/sign-in.ts";
 
 /**
@@ -36,7 +36,7 @@ beforeAll(async () => {
   for (const hour of [CURVED_HOUR, HOUR]) {
     const file = path.join(demoDir, demoFileName(RUN.runTime, hour));
     fs.writeFileSync(file, demoGribFile(RUN, hour));
-    await server.services.ingest.submitFile(file, { originalName: path.basename(file), source: "inbox", submittedBy: null });
+    await submitFromInbox(server, file);
   }
   chromium = await launchBrowser();
   browser = chromium.browser;

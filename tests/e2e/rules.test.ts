@@ -5,7 +5,7 @@ import { afterAll, beforeAll, beforeEach, describe, expect, it, onTestFailed } f
 import type { Browser, BrowserContext, Page } from "playwright-core";
 import { writeDemoRun } from "../../server/demo/demo-run.ts";
 import { launchBrowser, screenshot } from "./helpers/browser.ts";
-import { startE2eServer, E2E_PASSWORD } from "./helpers/server.ts";
+import { startE2eServer, E2E_PASSWORD, submitFromInbox } from "./helpers/server.ts";
 import { signInThroughPage } from "./helpers/sign-in.ts";
 
 /**
@@ -30,7 +30,7 @@ const pageErrors: string[] = [];
 
 /** Resolves once the ingest of `file` has stored its frame (frames are stored only once fully diagnosed). */
 async function ingestAndWait(file: string): Promise<void> {
-  await server.services.ingest.submitFile(file, { originalName: path.basename(file), source: "inbox", submittedBy: null });
+  await submitFromInbox(server, file);
   const deadline = Date.now() + 180_000;
   while ((await server.services.grids.listRuns(5)).flatMap((run) => run.frames).length === 0) {
     if (Date.now() > deadline) throw new Error(`${path.basename(file)} was not ingested within 3 minutes`);

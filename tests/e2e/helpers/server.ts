@@ -21,3 +21,8 @@ export async function startE2eServer(env: Record<string, string> = {}): Promise<
     },
   };
 }
+
+/** Hands a grid file to the running server's ingest as if it had landed in the inbox (the file is moved). */
+export function submitFromInbox(running: RunningBellwether, file: string) {
+  return running.services.ingest.submitFile(file, { originalName: path.basename(file), source: "inbox", submittedBy: null });
+}
