@@ -29,10 +29,9 @@ import { useFrameStepKeys } from "../../hooks/use-frame-step-keys.ts";
 import { mapViewFromSearch, searchFromMapView, type MapViewSettings } from "../../map-view-params.ts";
 import { FrameStepper, neighbourFrames } from "./frame-stepper.tsx";
 import { GridFacts } from "./grid-facts.tsx";
-import { DEFAULT_OVERLAYS, MAP_OVERLAYS, type OverlayContext } from "./map-overlays.tsx";
+import { defaultOverlays, MAP_OVERLAYS, type OverlayContext } from "./map-overlays.tsx";
 import { OverlayGroupLegends, OverlayToggles } from "./overlay-toggles.tsx";
 
-const OVERLAY_IDS = MAP_OVERLAYS.map((overlay) => overlay.id);
 
 /** The field's range over every frame of the run that is loaded, so colours mean the same at every valid time. */
 function useRunRange(frame: MapFrame, fieldKey: string | null) {
@@ -51,7 +50,12 @@ function useRunRange(frame: MapFrame, fieldKey: string | null) {
 export function FrameMapView({ frame }: { frame: MapFrame }) {
   const [search, setSearch] = useSearchParams();
   const navigate = useNavigate();
-  const settings = mapViewFromSearch(search, DEFAULT_OVERLAYS, OVERLAY_IDS);
+  const defaults = defaultOverlays();
+  const settings = mapViewFromSearch(
+    search,
+    defaults,
+    MAP_OVERLAYS.map((overlay) => overlay.id),
+  );
   const groups = useMemo(() => groupMapFields(frame.fields), [frame.fields]);
   const fieldKey = settings.field && frame.fields.some((f) => f.key === settings.field) ? settings.field : defaultFieldKey(frame.fields);
   const info = frame.fields.find((f) => f.key === fieldKey) ?? null;
@@ -61,7 +65,7 @@ export function FrameMapView({ frame }: { frame: MapFrame }) {
   const values = useFieldValues(frame.id, fieldKey, frame.geometry);
   const [point, setPoint] = useState<MapPoint | null>(null);
 
-  const update = (next: Partial<MapViewSettings>) => setSearch(searchFromMapView({ ...settings, field: fieldKey, ...next }, DEFAULT_OVERLAYS), { replace: true });
+  const update = (next: Partial<MapViewSettings>) => setSearch(searchFromMapView({ ...settings, field: fieldKey, ...next }, defaults), { replace: true });
   const linkTo = (frameId: number) => gridFramePath(frameId, search.toString());
   const { previous, next } = neighbourFrames(runFrames, frame.id);
   useFrameStepKeys((direction) => {

@@ -40,7 +40,7 @@ export interface MapOverlayGroup {
 
 export const MAP_OVERLAY_GROUPS: readonly MapOverlayGroup[] = [JET_OVERLAY_GROUP];
 
-export const MAP_OVERLAYS: readonly MapOverlay[] = [
+const overlays: MapOverlay[] = [
   ...JET_SHADING_OVERLAYS,
   {
     id: "contours",
@@ -59,5 +59,18 @@ export const MAP_OVERLAYS: readonly MapOverlay[] = [
   ...JET_LINE_OVERLAYS,
 ];
 
+/** Every overlay, in drawing order; read it at render time, since the app may add overlays of other features. */
+export const MAP_OVERLAYS: readonly MapOverlay[] = overlays;
+
+/**
+ * Adds overlays that other features own (features do not import each other, so the app's route
+ * module composes them). Call once at module load; an id already listed is skipped.
+ */
+export function addMapOverlays(extra: readonly MapOverlay[]): void {
+  for (const overlay of extra) if (!overlays.some((o) => o.id === overlay.id)) overlays.push(overlay);
+}
+
 /** Overlay ids shown when the URL does not say. */
-export const DEFAULT_OVERLAYS: readonly string[] = MAP_OVERLAYS.filter((overlay) => overlay.visibleByDefault).map((overlay) => overlay.id);
+export function defaultOverlays(): readonly string[] {
+  return overlays.filter((overlay) => overlay.visibleByDefault).map((overlay) => overlay.id);
+}
