@@ -168,7 +168,9 @@ export class TriggerService {
     const triggers = await this.dataSource.getRepository(TriggerEntity).find({ where: { openedAt: LessThan(cutoff) }, order: { openedAt: "DESC" }, take: limit });
     const jobs = await this.dataSource.getRepository(IngestJobEntity).find({ where: { finishedAt: LessThan(cutoff) }, order: { finishedAt: "DESC" }, take: limit });
     const escalations = await this.dataSource.getRepository(TriggerEventEntity).find({ where: { kind: "escalated", at: LessThan(cutoff) }, order: { at: "DESC" }, take: limit });
-    const reports = await this.dataSource.getRepository(StormReportEntity).find({ where: { time: LessThan(cutoff) }, order: { time: "DESC" }, take: limit });
+    // A report joins the timeline when its time has come (the demo places invented ones on the run's clock).
+    const reportCutoff = [cutoff, this.now().toISOString()].sort()[0]!;
+    const reports = await this.dataSource.getRepository(StormReportEntity).find({ where: { time: LessThan(reportCutoff) }, order: { time: "DESC" }, take: limit });
     const entries: TimelineEntryDto[] = [
       ...(await this.summaries(triggers)).map((t) => ({ kind: "trigger" as const, at: t.openedAt, trigger: t })),
       ...jobs.map((j) => ({ kind: "grid" as const, at: j.finishedAt!, jobId: j.id, name: j.originalName, state: j.state, frameCount: j.frameCount, reason: j.failureReason })),

@@ -1,4 +1,5 @@
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
+import { SYSTEM_ACTOR } from "../../server/audit/audit-log.ts";
 import { startTestServer, signIn, type SignedInAgent, type TestServer } from "../helpers/test-server.ts";
 import { STORM_REPORT_CSV_HEADER } from "../../shared/storm-reports/storm-report-csv.ts";
 
@@ -79,5 +80,17 @@ describe("storm-report upload", () => {
       "2026-05-14T21:40:00.000Z hail",
       "2026-05-14T21:35:00.000Z tornado",
     ]);
+  });
+
+  it("puts a report on the timeline only once its time has come", async () => {
+    const soon = new Date(NOW.getTime() + 2 * 3_600_000).toISOString();
+    await server.services.stormReports.storeInvented(SYSTEM_ACTOR, "future", [
+      { time: soon, latitude: 35, longitude: -98, kind: "hail", magnitude: 1, magnitudeUnit: "in", magnitudeSi: 0.0254, remarks: "Invented: not yet observed" },
+    ]);
+    const forecaster = await signIn(server.app, "forecaster");
+    const reports = (await forecaster.agent.get("/api/storm-reports?kind=hail")).body.reports.map((r: { time: string }) => r.time);
+    expect(reports).toContain(soon);
+    const timeline = (await forecaster.agent.get("/api/timeline")).body.entries.filter((e: { kind: string }) => e.kind === "report");
+    expect(timeline.map((e: { at: string }) => e.at)).not.toContain(soon);
   });
 });
