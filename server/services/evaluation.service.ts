@@ -75,15 +75,20 @@ export class EvaluationService {
     const since = new Date(this.now().getTime() - hours * 3_600_000).toISOString();
     const frames = await this.deps.dataSource.getRepository(GridFrameEntity).find({ where: { createdAt: MoreThan(since) }, order: { validTime: "ASC" } });
     const active = await this.deps.rules.activeVersions();
+    if (frames.length === 0 || active.length === 0) return 0;
+    // One query for every (version, frame) pair already evaluated, instead of one per pair.
+    const done = await this.deps.dataSource.getRepository(RuleEvaluationEntity).find({
+      where: { frameId: In(frames.map((f) => f.id)), ruleVersionId: In(active.map((a) => a.version.id)) },
+      select: { frameId: true, ruleVersionId: true },
+    });
+    const evaluated = new Set(done.map((e) => `${e.ruleVersionId}|${e.frameId}`));
     let count = 0;
     for (const frame of frames) {
-      for (const { version } of active) {
-        const done = await this.deps.dataSource.getRepository(RuleEvaluationEntity).exists({ where: { ruleVersionId: version.id, frameId: frame.id } });
-        if (!done) {
-          this.enqueue(frame.id);
-          count++;
-          break;
-        }
+      // A version whose valid-time window leaves the frame out never evaluates it: not missing.
+      const due = active.filter(({ definition }) => isWithinValidTimeWindow(definition.validTimeWindow, { runTime: frame.runTime, validTime: frame.validTime }));
+      if (due.some(({ version }) => !evaluated.has(`${version.id}|${frame.id}`))) {
+        this.enqueue(frame.id);
+        count++;
       }
     }
     return count;

@@ -171,6 +171,17 @@ describe("triggers from ingested frames", () => {
   });
 });
 
+describe("re-check after a restart", () => {
+  it("queues only frames a current version has not evaluated, never those its window leaves out", async () => {
+    const windowed = testRule([zoneId], { name: "Only the analysis hour", validTimeWindow: { kind: "forecast-hours", fromHour: 0, toHour: 0 } });
+    expect((await lead.agent.post("/api/rules").set("x-csrf-token", lead.csrf).send(windowed)).status).toBe(201);
+    await server.services.evaluation.recheckRecent(24);
+    await settle();
+    // Every due evaluation now exists; the windowed rule's frames (all past hour 0) are not "missing".
+    expect(await server.services.evaluation.recheckRecent(24)).toBe(0);
+  });
+});
+
 describe("preview and backtest", () => {
   it("previews an unsaved expression on the newest frame", async () => {
     const res = await lead.agent.post("/api/rules/preview").set("x-csrf-token", lead.csrf).send({ expression: "shear_0_6km >= 10", zoneIds: [zoneId] });
