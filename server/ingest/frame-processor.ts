@@ -66,7 +66,7 @@ export class GridFrameProcessor implements FrameProcessor {
       for (const [index, frame] of frames.entries()) {
         const span = 0.85 / frames.length;
         const base = 0.1 + index * span;
-        const label = `frame ${index + 1} of ${frames.length} (valid ${frame.validTime})`;
+        const label = `frame ${index + 1} of ${frames.length} (valid ${frame.validTime.slice(0, 10)} ${frame.validTime.slice(11, 16)}Z)`;
         await progress("diagnosing", base, `Diagnosing ${label}`);
         let last = 0;
         const columns = await this.deps.diagnoseColumns(frame, (f) => {

@@ -10,6 +10,7 @@ import { writeTransaction } from "../db/data-source.ts";
 import type { EventBus } from "../realtime/event-bus.ts";
 import { describeUnknownFormat, detectGridFormat } from "./detect-format.ts";
 import type { FrameProcessor } from "./frame-processor.ts";
+import { ingestFailureReason } from "./failure-reason.ts";
 
 export interface SubmitOptions {
   originalName: string;
@@ -163,8 +164,8 @@ export class IngestService {
       });
       this.deps.events.emit("ingest.finished", { jobId, state: "ready", reason: null, frameIds: result.frameIds });
     } catch (error) {
-      const reason = error instanceof Error ? error.message : String(error);
-      this.deps.logger.warn({ jobId, reason }, "ingest job failed");
+      const reason = ingestFailureReason(error);
+      this.deps.logger.warn({ jobId, reason, err: error }, "ingest job failed");
       await this.update(jobId, { state: "failed", failureReason: reason, stageNote: null, finishedAt: this.now() });
       this.deps.events.emit("ingest.finished", { jobId, state: "failed", reason, frameIds: [] });
     }
